@@ -1,0 +1,28 @@
+import type { ReactNode } from 'react';
+import { forbidden } from 'next/navigation';
+import { AppNav } from '@/components/nav/app-nav';
+import { Brand } from '@/components/shell/brand';
+import { DatabaseUnavailable } from '@/components/shell/database-unavailable';
+import { loadLayoutUser } from '@/components/shell/load-user';
+import { UserMenu } from '@/components/shell/user-menu';
+import { isDemoMode } from '@/lib/email/mailbox';
+import { navFor, STAFF_NAV } from '@/lib/nav';
+
+export default async function ShopLayout({ children }: { children: ReactNode }) {
+  const user = await loadLayoutUser();
+  if (user === 'unavailable') return <DatabaseUnavailable />;
+  if (user.role === 'customer') forbidden();
+  const items = navFor(user.role, STAFF_NAV, { demoMode: isDemoMode() });
+  return (
+    <div className="min-h-screen md:flex">
+      <AppNav
+        variant="side"
+        items={items}
+        brand={<Brand href="/home" />}
+        footer={<UserMenu user={user} accountHref="/account" />}
+        className="md:sticky md:top-0 md:h-screen md:w-60 md:shrink-0"
+      />
+      <main className="min-w-0 flex-1 px-4 py-6 md:px-8">{children}</main>
+    </div>
+  );
+}

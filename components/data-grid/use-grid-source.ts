@@ -1,0 +1,102 @@
+'use client';
+
+import { useCallback, useEffect, useMemo, useRef, useState } from 'react';
+import useSWR, { useSWRConfig } from 'swr';
+import type { GridApi, IDatasource, IGetRowsParams } from 'ag-grid-community';
+import { buildGridUrl, fetchGridPage, type GridPage, type GridSortItem, type GridView } from './grid-query';
+
+type Options = { url: string; blockSize: number };
+
+/**
+ * Feeds ag-grid's infinite row model from a JSON route through SWR.
+ *
+ * Every block goes through SWR's cache under its own URL. The first block of the current view is
+ * also watched with useSWR, so SWR's usual triggers (window focus, reconnect, a `mutate()` of that
+ * URL after a save elsewhere) refresh what the grid shows without fetching on mount twice.
+ */
+export function useGridSource<T>({ url, blockSize }: Options) {
+  const { mutate } = useSWRConfig();
+  const apiRef = useRef<GridApi<T> | null>(null);
+  const qRef = useRef('');
+  const [view, setView] = useState<GridView>({ sort: [], filter: null, q: '' });
+  const [total, setTotal] = useState<number | null>(null);
+  const [error, setError] = useState<string | null>(null);
+  // First blocks already given to the grid, so a re-render with the same object is not "new".
+  const served = useRef(new WeakSet<GridPage<T>>());
+  // A first block SWR fetched by itself (focus, mutate) that the next getRows should use as is.
+  const fresh = useRef<{ key: string; page: GridPage<T> } | null>(null);
+
+  const firstKey = buildGridUrl(url, view, { offset: 0, limit: blockSize });
+  const { data: watched } = useSWR<GridPage<T>>(firstKey, fetchGridPage<T>, {
+    revalidateOnMount: false,
+    revalidateIfStale: false,
+    revalidateOnFocus: true,
+    revalidateOnReconnect: true,
+    shouldRetryOnError: false,
+  });
+
+  useEffect(() => {
+    if (!watched || served.current.has(watched)) return;
+    fresh.current = { key: firstKey, page: watched };
+    // Keeps the rows on screen while the grid asks again; no loading flash.
+    apiRef.current?.refreshInfiniteCache();
+  }, [watched, firstKey]);
+
+  const datasource = useMemo<IDatasource>(
+    () => ({
+      getRows(params: IGetRowsParams<T>) {
+        const current: GridView = {
+          sort: params.sortModel as GridSortItem[],
+          filter: (params.filterModel as Record<string, unknown> | null) ?? null,
+          q: qRef.current,
+        };
+        const key = buildGridUrl(url, current, { offset: params.startRow, limit: params.endRow - params.startRow });
+        const isFirst = params.startRow === 0;
+        if (isFirst) {
+          setView((old) => (buildGridUrl(url, old, { format: 'csv' }) === buildGridUrl(url, current, { format: 'csv' }) ? old : current));
+        }
+        const cached = isFirst && fresh.current?.key === key ? fresh.current.page : null;
+        if (isFirst) fresh.current = null;
+        const load: Promise<GridPage<T> | undefined> = cached
+          ? Promise.resolve(cached)
+          : mutate<GridPage<T>>(key, fetchGridPage<T>(key), { revalidate: false });
+        const fail = (message: string) => {
+          setError(message);
+          params.failCallback();
+        };
+        load.then(
+          (page) => {
+            if (!page) return fail('The list answered with no data.');
+            if (isFirst) served.current.add(page);
+            setTotal(page.total);
+            setError(null);
+            params.successCallback(page.rows, page.total);
+          },
+          (err: unknown) => fail(err instanceof Error ? err.message : 'The list could not be loaded.'),
+        );
+      },
+    }),
+    [url, mutate],
+  );
+
+  const setSearch = useCallback((q: string) => {
+    if (q === qRef.current) return;
+    qRef.current = q;
+    setView((old) => ({ ...old, q }));
+    const api = apiRef.current;
+    if (!api) return;
+    api.ensureIndexVisible(0, 'top');
+    api.purgeInfiniteCache();
+  }, []);
+
+  const retry = useCallback(() => {
+    setError(null);
+    apiRef.current?.purgeInfiniteCache();
+  }, []);
+
+  const attach = useCallback((api: GridApi<T> | null) => {
+    apiRef.current = api;
+  }, []);
+
+  return { datasource, view, total, error, setSearch, retry, attach };
+}

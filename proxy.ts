@@ -1,0 +1,25 @@
+import { type NextRequest, NextResponse } from 'next/server';
+
+// Cross-site request check for route handlers: a state-changing request must come from our own
+// origin. Server actions get the same check from Next itself. The Stripe webhook is exempt: it is
+// authenticated by its signature instead. This is not the permission check (lib/auth does that).
+export function proxy(req: NextRequest) {
+  if (req.method === 'GET' || req.method === 'HEAD' || req.method === 'OPTIONS') return NextResponse.next();
+  if (req.nextUrl.pathname.startsWith('/api/webhooks/')) return NextResponse.next();
+  const origin = req.headers.get('origin');
+  const host = req.headers.get('x-forwarded-host') ?? req.headers.get('host');
+  if (origin !== null) {
+    let originHost: string | null = null;
+    try {
+      originHost = new URL(origin).host;
+    } catch {
+      originHost = null;
+    }
+    if (!host || originHost !== host) {
+      return NextResponse.json({ error: { code: 'FORBIDDEN', message: 'Cross-site request refused.' } }, { status: 403 });
+    }
+  }
+  return NextResponse.next();
+}
+
+export const config = { matcher: ['/api/:path*'] };

@@ -1,0 +1,111 @@
+import type { Browser } from 'playwright-core';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { DEMO_PASSWORD } from '@/lib/seed';
+import { APP_URL, launchBrowser, screenshot, signInAs } from '../helpers/browser';
+import { firstLink, waitForMessage } from '../helpers/mailbox';
+
+let browser: Browser;
+beforeAll(async () => {
+  browser = await launchBrowser();
+});
+afterAll(async () => {
+  await browser?.close();
+});
+
+const ROLE_NAV: { role: string; email: string; sees: string[]; doesNotSee: string[] }[] = [
+  { role: 'owner', email: 'owner@kestrel-plating.test', sees: ['Home', 'Users', 'Demo mailbox'], doesNotSee: [] },
+  { role: 'estimator', email: 'estimator@kestrel-plating.test', sees: ['Home'], doesNotSee: ['Users', 'Demo mailbox'] },
+  { role: 'plater', email: 'plater@kestrel-plating.test', sees: ['Home'], doesNotSee: ['Users', 'Demo mailbox'] },
+  { role: 'supervisor', email: 'supervisor@kestrel-plating.test', sees: ['Home'], doesNotSee: ['Users', 'Demo mailbox'] },
+  { role: 'customer', email: 'buyer@northgate-fastener.test', sees: ['Overview'], doesNotSee: ['Users', 'Home'] },
+];
+
+describe('signing in', () => {
+  for (const r of ROLE_NAV) {
+    it(`[${r.role}] signs in and sees their own navigation`, async () => {
+      const context = await browser.newContext();
+      const page = await context.newPage();
+      try {
+        await signInAs(page, r.email, DEMO_PASSWORD);
+        const nav = page.getByRole('navigation').first();
+        for (const label of r.sees) await expect(nav.getByRole('link', { name: label, exact: true }).count()).resolves.toBe(1);
+        for (const label of r.doesNotSee) await expect(nav.getByRole('link', { name: label, exact: true }).count()).resolves.toBe(0);
+        await screenshot(page, `home-${r.role}`);
+      } finally {
+        await context.close();
+      }
+    });
+  }
+
+  it('[visitor] is sent to sign-in from a staff page', async () => {
+    const page = await browser.newPage();
+    try {
+      await page.goto(`${APP_URL}/settings/users`);
+      expect(new URL(page.url()).pathname).toBe('/sign-in');
+      expect(new URL(page.url()).searchParams.get('next')).toBe('/settings/users');
+    } finally {
+      await page.close();
+    }
+  });
+
+  it('[visitor] with a wrong password gets the generic message', async () => {
+    const page = await browser.newPage();
+    try {
+      await page.goto(`${APP_URL}/sign-in`);
+      await page.getByLabel('E-mail').fill('estimator@kestrel-plating.test');
+      await page.getByLabel('Password').fill('wrong-password');
+      await page.getByRole('button', { name: 'Sign in' }).click();
+      await expect(page.getByText('That e-mail address and password do not match an active account.').waitFor()).resolves.toBeUndefined();
+      expect(new URL(page.url()).pathname).toBe('/sign-in');
+      await screenshot(page, 'sign-in-wrong-password');
+    } finally {
+      await page.close();
+    }
+  });
+
+  it('[customer] opening a staff URL gets "not allowed" and no data', async () => {
+    const context = await browser.newContext();
+    const page = await context.newPage();
+    try {
+      await signInAs(page, 'buyer@northgate-fastener.test', DEMO_PASSWORD);
+      const res = await page.goto(`${APP_URL}/settings/users`);
+      expect(res?.status()).toBe(403);
+      await expect(page.getByRole('heading', { name: 'Not allowed' }).count()).resolves.toBe(1);
+      const body = await page.content();
+      expect(body).not.toContain('owner@kestrel-plating.test');
+      await screenshot(page, 'customer-not-allowed');
+    } finally {
+      await context.close();
+    }
+  });
+
+  it('[customer] can reset a forgotten password; the link works once', async () => {
+    const email = 'quality@halvorsen-valve.test';
+    const context = await browser.newContext();
+    const page = await context.newPage();
+    try {
+      const since = Date.now();
+      await page.goto(`${APP_URL}/reset`);
+      await page.getByLabel('E-mail').fill(email);
+      await page.getByRole('button', { name: 'Send me a link' }).click();
+      await page.getByText('If that address has an account').waitFor();
+      const link = firstLink((await waitForMessage(email, /Reset your Ampwright password/, since)).text);
+      expect(link.startsWith(`${APP_URL}/set-password/`)).toBe(true);
+
+      await page.goto(link);
+      await page.getByLabel('New password').fill('halvorsen-new-pass');
+      await page.getByLabel('Repeat the password').fill('halvorsen-new-pass');
+      await page.getByRole('button', { name: 'Save password' }).click();
+      await page.waitForURL((u) => u.pathname === '/sign-in');
+      await signInAs(page, email, 'halvorsen-new-pass');
+      expect(new URL(page.url()).pathname).toBe('/portal');
+
+      const again = await context.newPage();
+      await again.goto(link);
+      await expect(again.getByText('This link has already been used').count()).resolves.toBe(1);
+      await screenshot(again, 'reset-link-used');
+    } finally {
+      await context.close();
+    }
+  });
+});

@@ -1,0 +1,18 @@
+// The test database: migrated from empty and loaded with the demo seed, shared by integration and e2e set-up.
+import { createDb } from '@/db/kysely';
+import { migrateToLatest } from '@/db/migrate';
+import { createPool } from '@/db/pool';
+import { seedDemo } from '@/lib/seed';
+
+export const TEST_DATABASE_URL = process.env.TEST_DATABASE_URL ?? 'postgres://app@127.0.0.1:54329/ampwright_test';
+
+export async function prepareTestDatabase(): Promise<void> {
+  const db = createDb(createPool(TEST_DATABASE_URL));
+  try {
+    const { error } = await migrateToLatest(db);
+    if (error) throw error;
+    await seedDemo(db);
+  } finally {
+    await db.destroy();
+  }
+}
