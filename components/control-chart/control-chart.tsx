@@ -9,6 +9,7 @@ import {
   Tooltip,
   XAxis,
   YAxis,
+  type ActiveDotProps,
   type DotItemDotProps,
 } from 'recharts';
 import { cx } from '../ui/cx';
@@ -154,7 +155,7 @@ export function ControlChart({ points, cl, ucl, lcl, lsl, usl, unit, label, digi
           stroke={chartColors.inkMuted}
           strokeWidth={1.2}
           dot={renderDot}
-          activeDot={(props: DotItemDotProps) => {
+          activeDot={(props: ActiveDotProps) => {
             const p = props.payload as PreparedPoint | undefined;
             if (!p || props.cx === undefined || props.cy === undefined) return <g />;
             return <PointMark kind={p.kind} x={props.cx} y={props.cy} size={1.5} />;

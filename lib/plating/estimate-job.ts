@@ -88,6 +88,12 @@ function requireLoading(loading: unknown): Loading {
   return loading;
 }
 
+function replenishment(formula: string | undefined, metalG: number, element: string): JobFigures['salt'] {
+  if (!formula) return null;
+  const { saltG, metalFraction } = saltForMetal({ metalG, saltFormula: formula, element });
+  return { formula, grams: saltG, metalFraction };
+}
+
 export function estimateJob(input: JobInput): JobEstimate {
   const p = input.process;
   const metal = getMetal(p.element, p.charge);
@@ -126,14 +132,7 @@ export function estimateJob(input: JobInput): JobEstimate {
       anodeLossPercent: anodes === 'soluble' ? (p.anodeLossPercent ?? 0) : 0,
     });
     const salt =
-      anodes === 'insoluble' && p.replenishmentSalt
-        ? {
-            formula: p.replenishmentSalt,
-            ...(({ saltG, metalFraction }) => ({ grams: saltG, metalFraction }))(
-              saltForMetal({ metalG: metalUse.totalG, saltFormula: p.replenishmentSalt, element: metal.element }),
-            ),
-          }
-        : null;
+      anodes === 'insoluble' ? replenishment(p.replenishmentSalt, metalUse.totalG, metal.element) : null;
     return {
       efficiency: eff,
       ampHoursPerLoad: load.ampHours,
