@@ -4,6 +4,12 @@ import { type NextRequest, NextResponse } from 'next/server';
 // origin. Server actions get the same check from Next itself. The Stripe webhook is exempt: it is
 // authenticated by its signature instead. This is not the permission check (lib/auth does that).
 export function proxy(req: NextRequest) {
+  if (!req.nextUrl.pathname.startsWith('/api/')) {
+    // Layouts read the requested path to send a signed-out visitor back to it after sign-in.
+    const headers = new Headers(req.headers);
+    headers.set('x-ampwright-path', req.nextUrl.pathname + req.nextUrl.search);
+    return NextResponse.next({ request: { headers } });
+  }
   if (req.method === 'GET' || req.method === 'HEAD' || req.method === 'OPTIONS') return NextResponse.next();
   if (req.nextUrl.pathname.startsWith('/api/webhooks/')) return NextResponse.next();
   const origin = req.headers.get('origin');
@@ -22,4 +28,4 @@ export function proxy(req: NextRequest) {
   return NextResponse.next();
 }
 
-export const config = { matcher: ['/api/:path*'] };
+export const config = { matcher: ['/((?!_next/static|_next/image|favicon.ico).*)'] };

@@ -1,96 +1,12 @@
-// The one Database interface. Written beside the migrations; integration tests check that every
-// table and column named here exists in the migrated schema (tests/integration/schema.test.ts).
-import type { ColumnType, Generated, Insertable, Selectable, Updateable } from 'kysely';
+// The one Database interface, assembled from one file per migration group under db/types/.
+// Written beside the migrations; tests/integration/schema.test.ts checks each table exists.
+import type { FoundationTables } from './types/foundation';
+import type { CoreRecordTables } from './types/core-records';
+import type { QuoteTables } from './types/quotes';
 
-type Timestamp = ColumnType<Date, Date | string | undefined, Date | string>;
-type TimestampNullable = ColumnType<Date | null, Date | string | null | undefined, Date | string | null>;
-type Json<T> = ColumnType<T, string | T | undefined, string | T>;
+export type Database = FoundationTables & CoreRecordTables & QuoteTables;
 
-export type Role = 'owner' | 'estimator' | 'plater' | 'supervisor' | 'customer';
-export type UnitSystem = 'metric' | 'us';
-
-export type CustomersTable = {
-  id: Generated<string>;
-  code: string;
-  name: string;
-  billing_address: Generated<string>;
-  shipping_address: Generated<string>;
-  billing_email: string | null;
-  phone: Generated<string>;
-  payment_terms_days: Generated<number>;
-  tax_rate_bp: Generated<number>;
-  created_at: Generated<Timestamp>;
-  updated_at: Generated<Timestamp>;
-};
-
-export type UsersTable = {
-  id: string;
-  email: string;
-  name: string;
-  role: Role;
-  customer_id: string | null;
-  password_hash: string | null;
-  unit_system: Generated<UnitSystem>;
-  is_active: Generated<boolean>;
-  created_at: Generated<Timestamp>;
-  updated_at: Generated<Timestamp>;
-};
-
-export type SessionsTable = { id: string; user_id: string; expires_at: Timestamp };
-
-export type PasswordTokensTable = {
-  token_hash: string;
-  user_id: string;
-  purpose: 'reset' | 'invite';
-  expires_at: Timestamp;
-  used_at: TimestampNullable;
-  created_at: Generated<Timestamp>;
-};
-
-export type SignInAttemptsTable = {
-  id: Generated<number>;
-  email_key: string;
-  ip: string;
-  succeeded: boolean;
-  created_at: Generated<Timestamp>;
-};
-
-export type EmailsTable = {
-  id: Generated<number>;
-  to_address: string;
-  subject: string;
-  template: string;
-  message_id: string | null;
-  status: 'sent' | 'failed';
-  error: string | null;
-  created_at: Generated<Timestamp>;
-};
-
-export type AuditLogTable = {
-  id: Generated<number>;
-  actor_id: string | null;
-  action: string;
-  entity: string;
-  entity_id: string | null;
-  detail: Json<Record<string, unknown>>;
-  created_at: Generated<Timestamp>;
-};
-
-export type SettingsTable = { key: string; value: Json<unknown>; updated_at: Generated<Timestamp> };
-
-export type Database = {
-  customers: CustomersTable;
-  users: UsersTable;
-  sessions: SessionsTable;
-  password_tokens: PasswordTokensTable;
-  sign_in_attempts: SignInAttemptsTable;
-  emails: EmailsTable;
-  audit_log: AuditLogTable;
-  settings: SettingsTable;
-};
-
-export type Customer = Selectable<CustomersTable>;
-export type NewCustomer = Insertable<CustomersTable>;
-export type User = Selectable<UsersTable>;
-export type NewUser = Insertable<UsersTable>;
-export type UserUpdate = Updateable<UsersTable>;
+export * from './types/foundation';
+export * from './types/core-records';
+export * from './types/quotes';
+export type { Json, Timestamp, TimestampNullable, DateColumn, Numeric, NumericNullable } from './types/columns';

@@ -26,8 +26,11 @@ export function preparePoints(points: readonly ChartPoint[], limits: ChartLimits
   return { points: kept, dropped: points.length - kept.length };
 }
 
-/** A y-range that shows every point and every limit line, with a little room around them. */
-export function yDomain(points: readonly { value: number }[], limits: ChartLimits): [number, number] {
+/**
+ * A y-range that shows every point and every limit line with a little room, rounded out to a
+ * 1-2-5 step so the axis reads 48, 52, 56… rather than 48.3, 55.3, 62.3…
+ */
+export function yScale(points: readonly { value: number }[], limits: ChartLimits, targetTicks = 6): { domain: [number, number]; ticks: number[] } {
   const values = [
     ...points.map((p) => p.value),
     limits.cl,
@@ -36,12 +39,28 @@ export function yDomain(points: readonly { value: number }[], limits: ChartLimit
     ...(limits.lsl !== undefined ? [limits.lsl] : []),
     ...(limits.usl !== undefined ? [limits.usl] : []),
   ].filter((v) => Number.isFinite(v));
-  if (values.length === 0) return [0, 1];
+  if (values.length === 0) return { domain: [0, 1], ticks: [0, 0.5, 1] };
   const min = Math.min(...values);
   const max = Math.max(...values);
   const span = max - min;
-  const pad = span > 0 ? span * 0.08 : Math.abs(max) * 0.05 || 1;
-  return [min - pad, max + pad];
+  const pad = span > 0 ? span * 0.06 : Math.abs(max) * 0.05 || 1;
+  const lo = min - pad;
+  const hi = max + pad;
+  const step = niceStep((hi - lo) / Math.max(targetTicks - 1, 1));
+  const start = Math.floor(lo / step) * step;
+  const end = Math.ceil(hi / step) * step;
+  const ticks: number[] = [];
+  // Rounded through toFixed so 0.1 steps give 0.3, not 0.30000000000000004.
+  const decimals = Math.max(0, -Math.floor(Math.log10(step)) + 1);
+  for (let v = start; v <= end + step / 2; v += step) ticks.push(Number(v.toFixed(decimals)));
+  return { domain: [ticks[0] ?? start, ticks[ticks.length - 1] ?? end], ticks };
+}
+
+function niceStep(raw: number): number {
+  const power = 10 ** Math.floor(Math.log10(raw));
+  const fraction = raw / power;
+  const nice = fraction <= 1 ? 1 : fraction <= 2 ? 2 : fraction <= 5 ? 5 : 10;
+  return nice * power;
 }
 
 /** Limits must be finite numbers, with LCL ≤ CL ≤ UCL; a message per problem, empty when fine. */

@@ -16,7 +16,7 @@ import { cx } from '../ui/cx';
 import { EmptyState } from '../ui/empty-state';
 import { FormMessage } from '../ui/form-message';
 import { formatUnitValue } from '../unit-value';
-import { checkLimits, preparePoints, yDomain, type ChartPoint, type PreparedPoint } from './chart-model';
+import { checkLimits, preparePoints, yScale, type ChartPoint, type PreparedPoint } from './chart-model';
 import { ChartLegend, chartColors, formatTime, lineStyles, PointMark, TooltipBody } from './chart-parts';
 import { ReadingsTable } from './readings-table';
 
@@ -47,7 +47,7 @@ export function ControlChart({ points, cl, ucl, lcl, lsl, usl, unit, label, digi
   const limits = useMemo(() => ({ cl, ucl, lcl, lsl, usl }), [cl, ucl, lcl, lsl, usl]);
   const problems = useMemo(() => checkLimits(limits), [limits]);
   const prepared = useMemo(() => preparePoints(points, limits), [points, limits]);
-  const domain = useMemo(() => yDomain(prepared.points, limits), [prepared.points, limits]);
+  const scale = useMemo(() => yScale(prepared.points, limits), [prepared.points, limits]);
   const [showTable, setShowTable] = useState(false);
   const data = prepared.points;
   const hasSpec = lsl !== undefined || usl !== undefined;
@@ -126,7 +126,9 @@ export function ControlChart({ points, cl, ucl, lcl, lsl, usl, unit, label, digi
         />
         <YAxis
           type="number"
-          domain={domain}
+          domain={scale.domain}
+          ticks={scale.ticks}
+          interval={0}
           tickFormatter={(v: number) => formatUnitValue(v, '', { digits })}
           tick={{ fill: chartColors.inkMuted, fontSize: 12 }}
           stroke={chartColors.line}

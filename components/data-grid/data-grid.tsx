@@ -118,7 +118,7 @@ export function DataGrid<T>({
   }
 
   const status =
-    total === null ? 'Loading…' : total === 0 ? (view.q ? 'Nothing matches this search' : 'No rows yet') : `${countFormat.format(total)} ${total === 1 ? 'row' : 'rows'}`;
+    total === null ? (error ? 'Not loaded' : 'Loading…') : total === 0 ? (view.q ? 'Nothing matches this search' : 'No rows yet') : `${countFormat.format(total)} ${total === 1 ? 'row' : 'rows'}`;
 
   return (
     <section aria-label={label} className={cx('flex flex-col gap-2', className)}>

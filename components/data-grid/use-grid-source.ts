@@ -7,6 +7,10 @@ import { buildGridUrl, fetchGridPage, type GridPage, type GridSortItem, type Gri
 
 type Options = { url: string; blockSize: number };
 
+function sameView(url: string, a: GridView, b: GridView): boolean {
+  return buildGridUrl(url, a, { format: 'csv' }) === buildGridUrl(url, b, { format: 'csv' });
+}
+
 /**
  * Feeds ag-grid's infinite row model from a JSON route through SWR.
  *
@@ -52,9 +56,6 @@ export function useGridSource<T>({ url, blockSize }: Options) {
         };
         const key = buildGridUrl(url, current, { offset: params.startRow, limit: params.endRow - params.startRow });
         const isFirst = params.startRow === 0;
-        if (isFirst) {
-          setView((old) => (buildGridUrl(url, old, { format: 'csv' }) === buildGridUrl(url, current, { format: 'csv' }) ? old : current));
-        }
         const cached = isFirst && fresh.current?.key === key ? fresh.current.page : null;
         if (isFirst) fresh.current = null;
         const load: Promise<GridPage<T> | undefined> = cached
@@ -67,7 +68,11 @@ export function useGridSource<T>({ url, blockSize }: Options) {
         load.then(
           (page) => {
             if (!page) return fail('The list answered with no data.');
-            if (isFirst) served.current.add(page);
+            if (isFirst) {
+              served.current.add(page);
+              // Only now, with the page in SWR's cache: a watched key without data would fetch again.
+              setView((old) => (sameView(url, old, current) ? old : current));
+            }
             setTotal(page.total);
             setError(null);
             params.successCallback(page.rows, page.total);
@@ -82,11 +87,7 @@ export function useGridSource<T>({ url, blockSize }: Options) {
   const setSearch = useCallback((q: string) => {
     if (q === qRef.current) return;
     qRef.current = q;
-    setView((old) => ({ ...old, q }));
-    const api = apiRef.current;
-    if (!api) return;
-    api.ensureIndexVisible(0, 'top');
-    api.purgeInfiniteCache();
+    apiRef.current?.purgeInfiniteCache();
   }, []);
 
   const retry = useCallback(() => {

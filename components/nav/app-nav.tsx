@@ -5,7 +5,13 @@ import { usePathname } from 'next/navigation';
 import { useEffect, useId, useRef, useState, type ReactNode } from 'react';
 import { cx } from '../ui/cx';
 
-export type NavItem = { href: string; label: string; icon?: ReactNode };
+export type NavItem = {
+  href: string;
+  label: string;
+  icon?: ReactNode;
+  /** Light up only on this exact path, not on pages below it (for an area's overview item). */
+  exact?: boolean;
+};
 
 export type AppNavProps = {
   items: readonly NavItem[];
@@ -25,8 +31,8 @@ export type AppNavProps = {
 /** The item for the current page: the longest href that is the path or a parent of it. */
 export function findCurrentHref(items: readonly NavItem[], path: string): string | null {
   let best: string | null = null;
-  for (const { href } of items) {
-    const matches = href === '/' ? path === '/' : path === href || path.startsWith(`${href.replace(/\/$/, '')}/`);
+  for (const { href, exact } of items) {
+    const matches = href === '/' || exact ? path === href : path === href || path.startsWith(`${href.replace(/\/$/, '')}/`);
     if (matches && (best === null || href.length > best.length)) best = href;
   }
   return best;
@@ -117,7 +123,7 @@ export function AppNav({ items, currentPath, label = 'Main', brand, footer, vari
             );
           })}
         </ul>
-        {footer ? <div className={cx('border-t border-surface-line px-1 pt-2', !isSide && 'md:border-t-0 md:pt-0')}>{footer}</div> : null}
+        {footer ? <div className={cx('pt-2', !isSide && 'md:pt-0')}>{footer}</div> : null}
       </div>
     </nav>
   );

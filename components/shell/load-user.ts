@@ -1,4 +1,5 @@
 import 'server-only';
+import { headers } from 'next/headers';
 import { redirect } from 'next/navigation';
 import { isDatabaseUnavailable } from '@/db/errors';
 import { getCurrentUser, type SessionUser } from '@/lib/auth/current-user';
@@ -13,6 +14,9 @@ export async function loadLayoutUser(): Promise<SessionUser | 'unavailable'> {
     if (isDatabaseUnavailable(err)) return 'unavailable';
     throw err;
   }
-  if (!user) redirect('/sign-in');
+  if (!user) {
+    const path = (await headers()).get('x-ampwright-path');
+    redirect(path && path.startsWith('/') ? `/sign-in?next=${encodeURIComponent(path)}` : '/sign-in');
+  }
   return user;
 }

@@ -40,7 +40,8 @@ export function concentrateAdditionL(change: Change & { contentGramsPerLitre: nu
 export function decantForDilutionL(change: Change): number {
   const { volumeL, measured, target } = readChange(change);
   if (measured <= target) return 0;
-  return (volumeL * (measured - target)) / measured;
+  // Clamped: rounding must never ask for more than the whole bath.
+  return Math.min(volumeL, (volumeL * (measured - target)) / measured);
 }
 
 /** Amp-hour replenishment: mL = A·h ÷ 1000 × rate (mL per kA·h). */

@@ -47,3 +47,16 @@ export const DAILY_H = 24;
 export const WEEKLY_H = 168;
 
 export const round1 = (x: number): number => Math.round(x * 10) / 10;
+
+/** The temperature analyte every heated or ambient bath carries, read each shift. */
+export const temperature = (target: number, low: number, high: number, basis: string): Analyte => ({
+  key: 'temperature',
+  name: 'Temperature',
+  unit: '°C',
+  methodId: 'thermometer',
+  target,
+  lowerControl: low,
+  upperControl: high,
+  frequencyHours: EVERY_SHIFT_H,
+  basis,
+});

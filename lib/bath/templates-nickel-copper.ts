@@ -1,6 +1,6 @@
 // Nickel and copper bath templates. Sources are reference-sheet IDs' underlying documents.
 import { metalFraction } from '../chemistry/formula';
-import { DAILY_H, EVERY_SHIFT_H, TEMPLATE_NOTE, WEEKLY_H, round1, type BathTemplate } from './template-types';
+import { DAILY_H, EVERY_SHIFT_H, TEMPLATE_NOTE, WEEKLY_H, round1, temperature, type BathTemplate } from './template-types';
 
 const niInSulfate = metalFraction('NiSO4·6H2O', 'Ni');
 const niInChloride = metalFraction('NiCl2·6H2O', 'Ni');
@@ -75,17 +75,7 @@ export const NICKEL_COPPER_TEMPLATES: readonly BathTemplate[] = [
         frequencyHours: EVERY_SHIFT_H,
         basis: 'As printed in Wikipedia "Nickel electroplating"; many handbooks give 3.5–4.5: confirm with the supplier',
       },
-      {
-        key: 'temperature',
-        name: 'Temperature',
-        unit: '°C',
-        methodId: 'thermometer',
-        target: 55,
-        lowerControl: 40,
-        upperControl: 65,
-        frequencyHours: EVERY_SHIFT_H,
-        basis: 'Wikipedia "Nickel electroplating"',
-      },
+      temperature(55, 40, 65, 'Wikipedia "Nickel electroplating"'),
       {
         key: 'brightener',
         name: 'Brightener',
@@ -155,17 +145,7 @@ export const NICKEL_COPPER_TEMPLATES: readonly BathTemplate[] = [
         frequencyHours: EVERY_SHIFT_H,
         basis: 'Growel nickel sulphamate data sheet',
       },
-      {
-        key: 'temperature',
-        name: 'Temperature',
-        unit: '°C',
-        methodId: 'thermometer',
-        target: 45,
-        lowerControl: 40,
-        upperControl: 50,
-        frequencyHours: EVERY_SHIFT_H,
-        basis: 'Growel nickel sulphamate data sheet',
-      },
+      temperature(45, 40, 50, 'Growel nickel sulphamate data sheet'),
       {
         key: 'density',
         name: 'Density',
@@ -223,17 +203,7 @@ export const NICKEL_COPPER_TEMPLATES: readonly BathTemplate[] = [
         frequencyHours: DAILY_H,
         basis: 'Metal Finishing Guide Book, acid copper Table VIII',
       },
-      {
-        key: 'temperature',
-        name: 'Temperature',
-        unit: '°C',
-        methodId: 'thermometer',
-        target: 25,
-        lowerControl: 20,
-        upperControl: 30,
-        frequencyHours: EVERY_SHIFT_H,
-        basis: 'From memory',
-      },
+      temperature(25, 20, 30, 'From memory'),
       {
         key: 'brightener',
         name: 'Brightener',
@@ -304,17 +274,7 @@ export const NICKEL_COPPER_TEMPLATES: readonly BathTemplate[] = [
         frequencyHours: EVERY_SHIFT_H,
         basis: 'From memory',
       },
-      {
-        key: 'temperature',
-        name: 'Temperature',
-        unit: '°C',
-        methodId: 'thermometer',
-        target: 40,
-        lowerControl: 30,
-        upperControl: 50,
-        frequencyHours: EVERY_SHIFT_H,
-        basis: 'From memory',
-      },
+      temperature(40, 30, 50, 'From memory'),
     ],
     hazards: ['cyanide', 'caustic', 'hydrogen', 'heat', 'electrical'],
     note: TEMPLATE_NOTE,

@@ -1,17 +1,5 @@
 // Silver, gold, chromium and pretreatment templates. Sources are reference-sheet IDs' documents.
-import { DAILY_H, EVERY_SHIFT_H, TEMPLATE_NOTE, WEEKLY_H, type Analyte, type BathTemplate } from './template-types';
-
-const temperature = (target: number, low: number, high: number, basis: string): Analyte => ({
-  key: 'temperature',
-  name: 'Temperature',
-  unit: '°C',
-  methodId: 'thermometer',
-  target,
-  lowerControl: low,
-  upperControl: high,
-  frequencyHours: EVERY_SHIFT_H,
-  basis,
-});
+import { DAILY_H, EVERY_SHIFT_H, TEMPLATE_NOTE, WEEKLY_H, temperature, type BathTemplate } from './template-types';
 
 export const OTHER_TEMPLATES: readonly BathTemplate[] = [
   {

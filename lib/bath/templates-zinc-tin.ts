@@ -1,6 +1,6 @@
 // Zinc, zinc–nickel and tin bath templates. Sources are reference-sheet IDs' underlying documents.
 import { molarMass } from '../chemistry/formula';
-import { DAILY_H, EVERY_SHIFT_H, TEMPLATE_NOTE, WEEKLY_H, round1, type BathTemplate } from './template-types';
+import { DAILY_H, EVERY_SHIFT_H, TEMPLATE_NOTE, WEEKLY_H, round1, temperature, type BathTemplate } from './template-types';
 
 // Chloride carried per g/L of KCl and of zinc (as ZnCl2), for the total-chloride analysis.
 const clPerKcl = molarMass('Cl') / molarMass('KCl');
@@ -39,17 +39,7 @@ export const ZINC_TIN_TEMPLATES: readonly BathTemplate[] = [
         frequencyHours: DAILY_H,
         basis: 'Metal Finishing Guide Book zinc Table (low chemistry)',
       },
-      {
-        key: 'temperature',
-        name: 'Temperature',
-        unit: '°C',
-        methodId: 'thermometer',
-        target: 25,
-        lowerControl: 15,
-        upperControl: 48,
-        frequencyHours: EVERY_SHIFT_H,
-        basis: 'Metal Finishing Guide Book zinc Table; target from memory',
-      },
+      temperature(25, 15, 48, 'Metal Finishing Guide Book zinc Table; target from memory'),
       {
         key: 'brightener',
         name: 'Brightener',
@@ -129,17 +119,7 @@ export const ZINC_TIN_TEMPLATES: readonly BathTemplate[] = [
         frequencyHours: EVERY_SHIFT_H,
         basis: 'Metal Finishing Guide Book zinc Table',
       },
-      {
-        key: 'temperature',
-        name: 'Temperature',
-        unit: '°C',
-        methodId: 'thermometer',
-        target: 30,
-        lowerControl: 15,
-        upperControl: 55,
-        frequencyHours: EVERY_SHIFT_H,
-        basis: 'Metal Finishing Guide Book zinc Table; target from memory',
-      },
+      temperature(30, 15, 55, 'Metal Finishing Guide Book zinc Table; target from memory'),
       {
         key: 'brightener',
         name: 'Brightener',
@@ -198,17 +178,7 @@ export const ZINC_TIN_TEMPLATES: readonly BathTemplate[] = [
         frequencyHours: DAILY_H,
         basis: 'From memory',
       },
-      {
-        key: 'temperature',
-        name: 'Temperature',
-        unit: '°C',
-        methodId: 'thermometer',
-        target: 25,
-        lowerControl: 20,
-        upperControl: 30,
-        frequencyHours: EVERY_SHIFT_H,
-        basis: 'From memory',
-      },
+      temperature(25, 20, 30, 'From memory'),
       {
         key: 'brightener',
         name: 'Brightener',
@@ -255,17 +225,7 @@ export const ZINC_TIN_TEMPLATES: readonly BathTemplate[] = [
         frequencyHours: DAILY_H,
         basis: 'From memory',
       },
-      {
-        key: 'temperature',
-        name: 'Temperature',
-        unit: '°C',
-        methodId: 'thermometer',
-        target: 22,
-        lowerControl: 15,
-        upperControl: 30,
-        frequencyHours: EVERY_SHIFT_H,
-        basis: 'From memory',
-      },
+      temperature(22, 15, 30, 'From memory'),
       {
         key: 'additive',
         name: 'Grain refiner',

@@ -23,6 +23,7 @@ const FACET: readonly (string | typeof NUMBER)[] = [
 const NUMERIC = /^[+-]?(?:\d+\.?\d*|\.\d+)(?:[eE][+-]?\d+)?$/;
 const MAX_TOKEN = 128;
 const MAX_NAME_LINE = 4096;
+const UTF8_BOM = [0xef, 0xbb, 0xbf];
 
 type Place = 'before-solid' | 'in-solid' | 'after-solid';
 
@@ -40,15 +41,24 @@ export class AsciiStlReader {
   private readonly numbers = new Float64Array(12);
   private numberCount = 0;
   private line = 1;
+  private bomSeen = 0; // bytes of a leading UTF-8 byte-order mark matched so far; −1 once past it
   private facetLine = 0;
   private readonly mesh = new MeshAccumulator();
-  sawFacet = false;
+  acceptedTokens = 0; // more than one means the text got past its "solid" line as real STL
   byteLength = 0;
 
   push(chunk: Uint8Array): void {
     this.byteLength += chunk.length;
     for (let i = 0; i < chunk.length; i++) {
       const b = chunk[i]!;
+      if (this.bomSeen >= 0) {
+        if (b === UTF8_BOM[this.bomSeen]) {
+          if (++this.bomSeen === UTF8_BOM.length) this.bomSeen = -1;
+          continue;
+        }
+        if (this.bomSeen > 0) this.fail('syntax', 'the file starts with a broken byte-order mark');
+        this.bomSeen = -1;
+      }
       if (this.skippingLine) {
         if (b === 10 || b === 13) this.skippingLine = false;
         else if (++this.skipped > MAX_NAME_LINE) this.fail('syntax', 'the line after "solid" is too long for an ASCII STL');
@@ -95,11 +105,13 @@ export class AsciiStlReader {
       const expected = this.place === 'before-solid' ? 'solid' : 'solid" or the end of the file';
       if (word !== 'solid') this.fail('syntax', `expected "${expected}", found "${text}"`);
       this.place = 'in-solid';
+      this.acceptedTokens++;
       this.skipLine(terminator);
       return;
     }
     if (this.step === 0 && word === 'endsolid') {
       this.place = 'after-solid';
+      this.acceptedTokens++;
       this.skipLine(terminator);
       return;
     }
@@ -116,10 +128,8 @@ export class AsciiStlReader {
       }
       this.fail('syntax', `expected "${expected}", found "${text}"`);
     }
-    if (this.step === 0) {
-      this.facetLine = this.line;
-      this.sawFacet = true;
-    }
+    if (this.step === 0) this.facetLine = this.line;
+    this.acceptedTokens++;
     if (++this.step === FACET.length) this.closeFacet();
   }
 

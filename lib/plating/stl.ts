@@ -53,8 +53,7 @@ export class StlParser {
   private ascii: AsciiStlReader | null = null;
   private binaryError: StlError | null = null;
   private asciiError: StlError | null = null;
-  private asciiSawFacet = false;
-  private asciiFailedAtEnd = false;
+  private asciiProgress = 0;
   private byteLength = 0;
 
   constructor(options: StlOptions = {}) {
@@ -116,7 +115,7 @@ export class StlParser {
         this.ascii.push(chunk);
       } catch (e) {
         this.asciiError = asStlError(e);
-        this.asciiSawFacet = this.ascii.sawFacet;
+        this.asciiProgress = this.ascii.acceptedTokens;
         this.ascii = null;
       }
     }
@@ -133,16 +132,16 @@ export class StlParser {
         this.binaryError = asStlError(e);
       } else {
         this.asciiError = asStlError(e);
-        this.asciiSawFacet = (reader as AsciiStlReader).sawFacet;
-        this.asciiFailedAtEnd = true;
+        this.asciiProgress = (reader as AsciiStlReader).acceptedTokens;
       }
       return null;
     }
   }
 
-  // When both readings fail, report the one the file was evidently meant to be.
+  // When both readings fail, report the one the file was evidently meant to be: ASCII if the text
+  // got past its "solid" line as STL keywords, binary otherwise.
   private pickError(): StlError {
-    if (this.asciiError && (this.asciiSawFacet || this.asciiFailedAtEnd || !this.binaryError)) {
+    if (this.asciiError && (this.asciiProgress > 1 || !this.binaryError)) {
       return this.asciiError;
     }
     return this.binaryError ?? new StlError('not-stl', 'The file is not a readable STL.');

@@ -110,6 +110,8 @@ export function bakeRequirement(input: {
   return { required, minHours, minTempC: BAKE_MIN_C, maxTempC: BAKE_MAX_C, windowHours, notes, caution: BAKE_CAUTION };
 }
 
+const round1 = (x: number): number => Math.round(x * 10) / 10;
+
 function toMs(t: Date | number, field: string, label: string): number {
   const ms = t instanceof Date ? t.getTime() : t;
   return requireNumber(ms, field, label);
@@ -158,17 +160,17 @@ export function judgeBake(input: {
     reasons.push({ code: 'late_start', minutesLate, message: `Bake started ${minutesLate} min after the ${req.windowHours} h window closed.` });
   }
   if (tMin < req.minTempC) {
-    const d = req.minTempC - tMin;
+    const d = round1(req.minTempC - tMin);
     reasons.push({ code: 'temperature_low', degreesC: d, message: `Temperature fell ${d} °C below ${req.minTempC} °C.` });
   }
   if (tMax > req.maxTempC) {
-    const d = tMax - req.maxTempC;
+    const d = round1(tMax - req.maxTempC);
     reasons.push({ code: 'temperature_high', degreesC: d, message: `Temperature rose ${d} °C above ${req.maxTempC} °C.` });
   }
   if (req.minHours === null) {
     reasons.push({ code: 'duration_unknown', message: "Enter the bake time from the customer's specification." });
   } else if (duration < req.minHours) {
-    const hoursShort = req.minHours - duration;
+    const hoursShort = round1(req.minHours - duration);
     reasons.push({ code: 'duration_short', hoursShort, message: `Bake was ${hoursShort} h short of ${req.minHours} h.` });
   }
   return reasons.length === 0 ? { ok: true, deadline, notes: [] } : { ok: false, deadline, reasons };

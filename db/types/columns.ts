@@ -1,0 +1,11 @@
+import type { ColumnType } from 'kysely';
+
+// Column helpers shared by the table types.
+export type Timestamp = ColumnType<Date, Date | string | undefined, Date | string>;
+export type TimestampNullable = ColumnType<Date | null, Date | string | null | undefined, Date | string | null>;
+export type Json<T> = ColumnType<T, string | T | undefined, string | T>;
+// `date` columns come back as Date from pg; written as 'YYYY-MM-DD'.
+export type DateColumn = ColumnType<Date, Date | string, Date | string>;
+// numeric comes back as number (parser registered in db/pool.ts).
+export type Numeric = ColumnType<number, number | string, number | string>;
+export type NumericNullable = ColumnType<number | null, number | string | null | undefined, number | string | null>;

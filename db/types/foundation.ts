@@ -1,0 +1,92 @@
+// Tables of migration 2026_12_01_2200_create_foundation.
+import type { Generated, Insertable, Selectable, Updateable } from 'kysely';
+import type { Json, Timestamp, TimestampNullable } from './columns';
+
+export type Role = 'owner' | 'estimator' | 'plater' | 'supervisor' | 'customer';
+export type UnitSystem = 'metric' | 'us';
+
+export type CustomersTable = {
+  id: Generated<string>;
+  code: string;
+  name: string;
+  billing_address: Generated<string>;
+  shipping_address: Generated<string>;
+  billing_email: string | null;
+  phone: Generated<string>;
+  payment_terms_days: Generated<number>;
+  tax_rate_bp: Generated<number>;
+  created_at: Generated<Timestamp>;
+  updated_at: Generated<Timestamp>;
+};
+
+export type UsersTable = {
+  id: string;
+  email: string;
+  name: string;
+  role: Role;
+  customer_id: string | null;
+  password_hash: string | null;
+  unit_system: Generated<UnitSystem>;
+  is_active: Generated<boolean>;
+  created_at: Generated<Timestamp>;
+  updated_at: Generated<Timestamp>;
+};
+
+export type SessionsTable = { id: string; user_id: string; expires_at: Timestamp };
+
+export type PasswordTokensTable = {
+  token_hash: string;
+  user_id: string;
+  purpose: 'reset' | 'invite';
+  expires_at: Timestamp;
+  used_at: TimestampNullable;
+  created_at: Generated<Timestamp>;
+};
+
+export type SignInAttemptsTable = {
+  id: Generated<number>;
+  email_key: string;
+  ip: string;
+  succeeded: boolean;
+  created_at: Generated<Timestamp>;
+};
+
+export type EmailsTable = {
+  id: Generated<number>;
+  to_address: string;
+  subject: string;
+  template: string;
+  message_id: string | null;
+  status: 'sent' | 'failed';
+  error: string | null;
+  created_at: Generated<Timestamp>;
+};
+
+export type AuditLogTable = {
+  id: Generated<number>;
+  actor_id: string | null;
+  action: string;
+  entity: string;
+  entity_id: string | null;
+  detail: Json<Record<string, unknown>>;
+  created_at: Generated<Timestamp>;
+};
+
+export type SettingsTable = { key: string; value: Json<unknown>; updated_at: Generated<Timestamp> };
+
+export type FoundationTables = {
+  customers: CustomersTable;
+  users: UsersTable;
+  sessions: SessionsTable;
+  password_tokens: PasswordTokensTable;
+  sign_in_attempts: SignInAttemptsTable;
+  emails: EmailsTable;
+  audit_log: AuditLogTable;
+  settings: SettingsTable;
+};
+
+export type Customer = Selectable<CustomersTable>;
+export type NewCustomer = Insertable<CustomersTable>;
+export type User = Selectable<UsersTable>;
+export type NewUser = Insertable<UsersTable>;
+export type UserUpdate = Updateable<UsersTable>;

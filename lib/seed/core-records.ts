@@ -1,0 +1,122 @@
+// Demo lines, tanks, finishes, rates and parts of the invented shop. Idempotent (upserts by code).
+import { type Kysely, sql } from 'kysely';
+import type { Database } from '@/db/types';
+
+export const DEMO_LINES = [
+  { name: 'Rack nickel line', method: 'rack', description: 'Acid copper and Watts nickel on racks' },
+  { name: 'Barrel zinc line', method: 'barrel', description: 'Alkaline zinc in barrels, then passivate' },
+  { name: 'Precious metals line', method: 'mixed', description: 'Cyanide silver, acid gold and acid tin for electrical contacts' },
+] as const;
+
+type DemoTank = {
+  line: (typeof DEMO_LINES)[number]['name'];
+  code: string;
+  name: string;
+  template_id: string;
+  volume_l: number;
+  element: string | null;
+  ion_charge: number | null;
+  efficiency: number | null;
+  rectifier_max_a: number | null;
+  has_ah_meter: boolean;
+  anode_type: 'soluble' | 'insoluble' | 'none';
+  temp_min_c: number | null;
+  temp_max_c: number | null;
+};
+
+// Efficiencies are typical values (reference §2); the demo shop's own numbers are invented.
+export const DEMO_TANKS: DemoTank[] = [
+  { line: 'Rack nickel line', code: 'N-CU1', name: 'Acid copper', template_id: 'acid-copper', volume_l: 1500, element: 'Cu', ion_charge: 2, efficiency: 0.98, rectifier_max_a: 1000, has_ah_meter: true, anode_type: 'soluble', temp_min_c: 20, temp_max_c: 30 },
+  { line: 'Rack nickel line', code: 'N-NI1', name: 'Watts nickel', template_id: 'watts-nickel', volume_l: 2000, element: 'Ni', ion_charge: 2, efficiency: 0.95, rectifier_max_a: 1500, has_ah_meter: true, anode_type: 'soluble', temp_min_c: 50, temp_max_c: 60 },
+  { line: 'Barrel zinc line', code: 'Z-CL1', name: 'Alkaline electrocleaner', template_id: 'alkaline-electrocleaner', volume_l: 1200, element: null, ion_charge: null, efficiency: null, rectifier_max_a: 500, has_ah_meter: false, anode_type: 'none', temp_min_c: 55, temp_max_c: 75 },
+  { line: 'Barrel zinc line', code: 'Z-AC1', name: 'Hydrochloric acid dip', template_id: 'hydrochloric-acid-dip', volume_l: 800, element: null, ion_charge: null, efficiency: null, rectifier_max_a: null, has_ah_meter: false, anode_type: 'none', temp_min_c: null, temp_max_c: null },
+  { line: 'Barrel zinc line', code: 'Z-ZN1', name: 'Alkaline zinc', template_id: 'alkaline-zinc', volume_l: 3000, element: 'Zn', ion_charge: 2, efficiency: 0.72, rectifier_max_a: 2000, has_ah_meter: true, anode_type: 'soluble', temp_min_c: 20, temp_max_c: 30 },
+  { line: 'Precious metals line', code: 'P-AG1', name: 'Cyanide silver', template_id: 'cyanide-silver', volume_l: 200, element: 'Ag', ion_charge: 1, efficiency: 0.98, rectifier_max_a: 100, has_ah_meter: true, anode_type: 'soluble', temp_min_c: 20, temp_max_c: 30 },
+  { line: 'Precious metals line', code: 'P-AU1', name: 'Acid gold', template_id: 'acid-gold', volume_l: 60, element: 'Au', ion_charge: 1, efficiency: 0.45, rectifier_max_a: 20, has_ah_meter: true, anode_type: 'insoluble', temp_min_c: 30, temp_max_c: 50 },
+  { line: 'Precious metals line', code: 'P-SN1', name: 'Acid tin', template_id: 'acid-tin', volume_l: 400, element: 'Sn', ion_charge: 2, efficiency: 0.95, rectifier_max_a: 300, has_ah_meter: true, anode_type: 'soluble', temp_min_c: 15, temp_max_c: 30 },
+];
+
+export const DEMO_FINISHES = [
+  {
+    code: 'ZN-B633-SC2', name: 'Zinc, clear trivalent passivate (barrel)', spec_text: 'ASTM B633 Fe/Zn 8 (SC2) Type III',
+    element: 'Zn', ion_charge: 2, min_thickness_um: 8, method: 'barrel', current_density_adm2: 0.8, efficiency: 0.72, distribution_ratio: 0.5,
+    tank_volts: 9, parts_per_load: 2000, handling_minutes_per_load: 20, bake_required: false, bake_threshold_hrc: 31, bake_window_hours: 4, bake_temp_c: 200, bake_hours: 8,
+    process_route: [{ step: 'Alkaline electroclean' }, { step: 'Hydrochloric acid dip' }, { step: 'Alkaline zinc plate' }, { step: 'Trivalent clear passivate', note: 'chromate-free of hexavalent chromium' }],
+  },
+  {
+    code: 'ZN-B633-SC2-HS', name: 'Zinc on hardened steel with relief bake (barrel)', spec_text: 'ASTM B633 Fe/Zn 8 (SC2) Type III, bake per ASTM B850',
+    element: 'Zn', ion_charge: 2, min_thickness_um: 8, method: 'barrel', current_density_adm2: 0.8, efficiency: 0.72, distribution_ratio: 0.5,
+    tank_volts: 9, parts_per_load: 1500, handling_minutes_per_load: 20, bake_required: true, bake_threshold_hrc: 31, bake_window_hours: 4, bake_temp_c: 200, bake_hours: 12,
+    process_route: [{ step: 'Abrasive clean' }, { step: 'Alkaline zinc plate' }, { step: 'Hydrogen-embrittlement relief bake', note: 'within 4 h of plating' }, { step: 'Trivalent clear passivate' }],
+  },
+  {
+    code: 'NI-B689-25', name: 'Engineering nickel 25 µm (rack)', spec_text: 'ASTM B689 Type 1, 25 µm min',
+    element: 'Ni', ion_charge: 2, min_thickness_um: 25, method: 'rack', current_density_adm2: 4, efficiency: 0.95, distribution_ratio: 0.625,
+    tank_volts: 6, parts_per_load: 40, handling_minutes_per_load: 15, bake_required: false, bake_threshold_hrc: null, bake_window_hours: 4, bake_temp_c: null, bake_hours: null,
+    process_route: [{ step: 'Alkaline electroclean' }, { step: 'Acid activate' }, { step: 'Watts nickel plate' }],
+  },
+  {
+    code: 'SN-B545-C', name: 'Matte tin 8 µm (rack)', spec_text: 'ASTM B545 Class C, matte',
+    element: 'Sn', ion_charge: 2, min_thickness_um: 8, method: 'rack', current_density_adm2: 2, efficiency: 0.95, distribution_ratio: 0.7,
+    tank_volts: 3, parts_per_load: 200, handling_minutes_per_load: 12, bake_required: false, bake_threshold_hrc: null, bake_window_hours: 4, bake_temp_c: null, bake_hours: null,
+    process_route: [{ step: 'Electroclean' }, { step: 'Acid activate' }, { step: 'Acid tin plate' }],
+  },
+  {
+    code: 'AG-B700-5', name: 'Silver 5 µm over copper strike (rack)', spec_text: 'ASTM B700 Type 1 Grade A Class N, 5 µm min',
+    element: 'Ag', ion_charge: 1, min_thickness_um: 5, method: 'rack', current_density_adm2: 1, efficiency: 0.98, distribution_ratio: 0.7,
+    tank_volts: 2, parts_per_load: 150, handling_minutes_per_load: 15, bake_required: false, bake_threshold_hrc: null, bake_window_hours: 4, bake_temp_c: null, bake_hours: null,
+    process_route: [{ step: 'Electroclean' }, { step: 'Cyanide copper strike' }, { step: 'Cyanide silver plate' }],
+  },
+] as const;
+
+// Invented prices for the demo shop.
+export const DEMO_RATES = {
+  effective_from: '2026-01-01',
+  labour_per_hour_cents: 4200,
+  tank_hour_rack_cents: 3500,
+  tank_hour_barrel_cents: 2800,
+  metal_per_kg_cents: { Ni: 2200, Cu: 1100, Zn: 380, Sn: 3300, Ag: 98000, Au: 9500000 },
+  additives_per_kah_cents: 180,
+  power_per_kwh_cents: 14,
+  bake_per_load_cents: 4500,
+  lot_charge_cents: 3500,
+  minimum_charge_cents: 12500,
+  rush_multiplier_pct: 150,
+  margin_pct: 35,
+  quote_valid_days: 30,
+};
+
+export const DEMO_PARTS = [
+  { customer: 'NGF', part_number: 'NGF-HX-0816', revision: 'C', description: 'Hex cap screw M8×16, class 8.8', substrate: 'carbon-steel', tensile_mpa: 830, hardness_hrc: 25, area_dm2: 0.0915, weight_g: 9.6 },
+  { customer: 'NGF', part_number: 'NGF-SS-1240', revision: 'A', description: 'Socket set screw M12×40, hardened', substrate: 'carbon-steel', tensile_mpa: 1220, hardness_hrc: 39, area_dm2: 0.172, weight_g: 31.5 },
+  { customer: 'HVI', part_number: 'HV-STEM-220', revision: 'B', description: 'Valve stem, 22 mm × 180 mm', substrate: 'carbon-steel', tensile_mpa: 650, hardness_hrc: null, area_dm2: 1.32, weight_g: 540 },
+  { customer: 'BRL', part_number: 'BL-BUS-0450', revision: 'D', description: 'Copper bus bar 45 × 6 × 300 mm', substrate: 'copper', tensile_mpa: null, hardness_hrc: null, area_dm2: 3.15, weight_g: 726 },
+  { customer: 'BRL', part_number: 'BL-PIN-0102', revision: 'A', description: 'Brass contact pin 2 mm', substrate: 'brass', tensile_mpa: null, hardness_hrc: null, area_dm2: 0.0081, weight_g: 0.4 },
+] as const;
+
+export async function seedCoreRecords(db: Kysely<Database>): Promise<void> {
+  for (const l of DEMO_LINES) {
+    await db.insertInto('lines').values(l).onConflict((oc) => oc.column('name').doUpdateSet({ method: l.method, description: l.description })).execute();
+  }
+  const lines = new Map((await db.selectFrom('lines').select(['id', 'name']).execute()).map((l) => [l.name, l.id]));
+  for (const { line, ...t } of DEMO_TANKS) {
+    const values = { ...t, line_id: lines.get(line)! };
+    await db.insertInto('tanks').values(values).onConflict((oc) => oc.column('code').doUpdateSet(values)).execute();
+  }
+  for (const f of DEMO_FINISHES) {
+    const values = { ...f, process_route: JSON.stringify(f.process_route) };
+    await db.insertInto('finishes').values(values).onConflict((oc) => oc.column('code').doUpdateSet(values)).execute();
+  }
+  const rates = { ...DEMO_RATES, metal_per_kg_cents: JSON.stringify(DEMO_RATES.metal_per_kg_cents) };
+  await db.insertInto('rate_sets').values(rates).onConflict((oc) => oc.column('effective_from').doNothing()).execute();
+
+  const customers = new Map((await db.selectFrom('customers').select(['id', 'code']).execute()).map((c) => [c.code, c.id]));
+  for (const { customer, ...p } of DEMO_PARTS) {
+    const values = { ...p, customer_id: customers.get(customer)! };
+    await db
+      .insertInto('parts')
+      .values(values)
+      .onConflict((oc) => oc.columns(['customer_id', 'part_number', 'revision']).doUpdateSet({ ...p, updated_at: sql`now()` }))
+      .execute();
+  }
+}
