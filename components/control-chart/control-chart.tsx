@@ -96,7 +96,10 @@ export function ControlChart({ points, cl, ucl, lcl, lsl, usl, unit, label, digi
         <span className="text-sm font-semibold text-ink">
           {label} <span className="font-normal text-ink-muted">({unit})</span>
         </span>
-        <span className="sr-only">{summary}</span>
+        {/* Dates follow the reader's zone unless timeZone is set, so server and browser text may differ. */}
+        <span className="sr-only" suppressHydrationWarning>
+          {summary}
+        </span>
         {prepared.dropped > 0 ? (
           <span className="text-xs text-ink-muted">
             {prepared.dropped} {prepared.dropped === 1 ? 'reading has' : 'readings have'} no number and {prepared.dropped === 1 ? 'is' : 'are'} not shown.

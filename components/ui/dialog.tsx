@@ -22,7 +22,8 @@ const widths = { sm: 'max-w-sm', md: 'max-w-lg', lg: 'max-w-2xl' } as const;
 
 /**
  * A modal on the native <dialog>: the browser traps focus, makes the page inert, closes on Escape
- * and returns focus to the opener, so none of that is re-implemented here.
+ * and returns focus to the opener, so none of that is re-implemented here. Focus starts on the
+ * first focusable element (the close button) unless a field inside has `autoFocus`.
  */
 export function Dialog({ open, onClose, title, description, children, footer, size = 'md', dismissible = true, className }: DialogProps) {
   const ref = useRef<HTMLDialogElement>(null);

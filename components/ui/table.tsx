@@ -55,11 +55,12 @@ type CellOptions = {
 
 const cellPad = 'px-3 py-2 group-data-[dense]/table:px-2 group-data-[dense]/table:py-1';
 
+// No text-transform: units are case-sensitive (g/L is not G/L).
 export function Th({ numeric, className, scope = 'col', ...rest }: ComponentPropsWithoutRef<'th'> & CellOptions) {
   return (
     <th
       scope={scope}
-      className={cx(cellPad, 'text-xs font-semibold tracking-wide text-ink-muted uppercase', numeric && 'text-right', className)}
+      className={cx(cellPad, 'text-xs font-semibold text-ink-muted', numeric && 'text-right', className)}
       {...rest}
     />
   );

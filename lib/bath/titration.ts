@@ -127,7 +127,17 @@ export function factorPerMl(method: TitrationMethod): number {
 
 /** Problems with a method's stored data; empty when it can be used. */
 export function validateMethod(method: AnalysisMethod): string[] {
+  // Stored methods are edited JSON: a missing object must read as a problem, not a crash.
+  try {
+    return methodProblems(method);
+  } catch {
+    return ['The method data is incomplete.'];
+  }
+}
+
+function methodProblems(method: AnalysisMethod): string[] {
   const problems: string[] = [];
+  if (!method || !['titration', 'direct', 'derived'].includes(method.kind)) return ['Unknown kind of method.'];
   const positive = (v: unknown, label: string) => {
     if (typeof v !== 'number' || !Number.isFinite(v) || v <= 0) problems.push(`${label} must be greater than zero.`);
   };
@@ -165,8 +175,11 @@ export function validateMethod(method: AnalysisMethod): string[] {
         }
       }
     }
-  } else if (method.reportAs === 'specific_gravity' && method.quantity !== 'baume') {
-    problems.push('Only a Baumé reading can be reported as specific gravity.');
+  } else {
+    if (!Object.prototype.hasOwnProperty.call(DIRECT_RANGES, method.quantity)) problems.push('Unknown kind of reading.');
+    if (method.reportAs === 'specific_gravity' && method.quantity !== 'baume') {
+      problems.push('Only a Baumé reading can be reported as specific gravity.');
+    }
   }
   return problems;
 }

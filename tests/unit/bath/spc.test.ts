@@ -49,7 +49,7 @@ describe('Western Electric rule 4: eight in a row on one side', () => {
   it('does not fire on seven', () => expect(fired(eight.slice(0, 7), 'we4_run_one_side')).toEqual([]));
   it('a point on the centre line breaks the run', () =>
     expect(fired([0.1, 0.4, 0.2, 0, 0.3, 0.5, 0.2, 0.1], 'we4_run_one_side')).toEqual([]));
-  it('with a nine-point run (some software, Sepasoft) it fires one point later', () =>
+  it('with a nine-point run (used by some SPC references, reference §10.2) it fires one point later', () =>
     expect(fired([...eight, 0.6], 'we4_run_one_side', 9)).toEqual([8]));
   it('does not fire on an alternating series', () =>
     expect(fired([0.5, -0.5, 0.5, -0.5, 0.5, -0.5, 0.5, -0.5, 0.5], 'we4_run_one_side')).toEqual([]));
@@ -125,7 +125,7 @@ describe('capability', () => {
 
   it('textbook example: target 16.0 ± 0.2 oz, μ 15.9, σ 0.1 → Cpk 0.33', () => {
     // Source: Heizer & Render, Operations Management, Supplement 6, "Cocoa Fizz" Cpk example
-    // (as reproduced in a public course deck; the book attribution is from memory).
+    // (as reproduced in a public slide set; the book attribution is from memory).
     const c = capability({ mean: 15.9, sigma: 0.1, lsl: 15.8, usl: 16.2 });
     expect(c.cpk).toBeCloseTo(0.33, 2);
     expect(c.cp).toBeCloseTo(0.667, 3);

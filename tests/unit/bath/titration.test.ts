@@ -73,6 +73,14 @@ describe('generic titration formula (reference §4.1)', () => {
     );
   });
 
+  it('reads incomplete stored JSON as a problem, not a crash', () => {
+    const partial = JSON.parse('{"kind":"titration","id":"x","name":"X"}') as TitrationMethod;
+    expect(validateMethod(partial)).toEqual(['The method data is incomplete.']);
+    expect(computeAnalysis(partial, { buretteMl: 1 })).toMatchObject({ ok: false, field: 'method' });
+    const odd = JSON.parse('{"kind":"direct","id":"y","name":"Y","quantity":"colour"}') as TitrationMethod;
+    expect(computeAnalysis(odd, { reading: 1 })).toMatchObject({ ok: false, field: 'method' });
+  });
+
   it('survives a JSON round trip unchanged', () => {
     const copy = JSON.parse(JSON.stringify(nickel)) as TitrationMethod;
     expect(computeAnalysis(copy, { buretteMl: 12 })).toEqual(computeAnalysis(nickel, { buretteMl: 12 }));

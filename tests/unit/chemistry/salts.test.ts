@@ -29,8 +29,13 @@ describe('salt list', () => {
 
   it('acid densities agree with the Baumé relation', () => {
     // Source: Marks' Handbook via Engineers Edge (reference §4.3): 66 °Bé → 1.8354, 20 °Bé → 1.1600.
-    expect(getSalt('sulfuric-acid-66-baume')?.densityKgPerL).toBeCloseTo(baumeToSpecificGravity(66), 2);
-    expect(getSalt('hydrochloric-acid-20-baume')?.densityKgPerL).toBeCloseTo(baumeToSpecificGravity(20), 2);
+    const density = (id: string) => {
+      const s = getSalt(id);
+      if (s?.kind !== 'liquid') throw new Error(`${id} is not a liquid`);
+      return s.densityKgPerL;
+    };
+    expect(density('sulfuric-acid-66-baume')).toBeCloseTo(baumeToSpecificGravity(66), 2);
+    expect(density('hydrochloric-acid-20-baume')).toBeCloseTo(baumeToSpecificGravity(20), 2);
   });
 
   it('asks for a known id and refuses metal fractions of non-metal salts', () => {

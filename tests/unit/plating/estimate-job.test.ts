@@ -131,17 +131,19 @@ describe('estimateJob', () => {
         fc.constantFrom(...metals), positive, fc.integer({ min: 1, max: 1e6 }), positive,
         fc.double({ min: 0.01, max: 1, noNaN: true }), positive, fc.integer({ min: 1, max: 1e4 }),
         (m, area, qty, thickness, eff, j, perLoad) => {
+          let r;
           try {
-            const r = estimateJob({
+            r = estimateJob({
               areaPerPartDm2: area, quantity: qty, minimumThicknessUm: thickness,
               process: { ...nickelJob.process, ...m, efficiency: eff, currentDensityAdm2: j, partsPerLoad: perLoad, rectifierMaxA: 5000 },
             });
-            const numbers = numbersIn(r);
-            expect(numbers.length).toBeGreaterThan(30);
-            for (const n of numbers) expect(Number.isFinite(n)).toBe(true);
           } catch (err) {
             expect(err).toBeInstanceOf(PlatingInputError);
+            return;
           }
+          const numbers = numbersIn(r);
+          expect(numbers.length).toBeGreaterThan(20);
+          for (const n of numbers) expect(Number.isFinite(n)).toBe(true);
         },
       ),
       { numRuns: 300 },
