@@ -20,8 +20,9 @@ export function getGalvanicMaterial(id: string) {
   return GALVANIC_MATERIALS[id as GalvanicMaterial];
 }
 
-// Index values are in hundredths of a volt; rounding keeps 0.40 − 0.25 from reading 0.15000000000000002.
-const roundVolts = (v: number) => Math.round(v * 1000) / 1000;
+// Index values are in hundredths of a volt and E° in tenths of a millivolt; rounding to that keeps
+// 0.40 − 0.25 from reading 0.15000000000000002 and failing a ≤ 0.15 V limit.
+const roundVolts = (v: number) => Math.round(v * 10_000) / 10_000;
 
 function standardPotential(material: ReturnType<typeof getGalvanicMaterial>): number | null {
   return material.couple ? STANDARD_POTENTIALS[material.couple].volts : null;
