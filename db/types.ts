@@ -3,10 +3,16 @@
 import type { FoundationTables } from './types/foundation';
 import type { CoreRecordTables } from './types/core-records';
 import type { QuoteTables } from './types/quotes';
+import type { QualityTables } from './types/quality';
+import type { BillingTables } from './types/billing';
+import type { BathTables } from './types/bath';
 
-export type Database = FoundationTables & CoreRecordTables & QuoteTables;
+export type Database = FoundationTables & CoreRecordTables & QuoteTables & QualityTables & BillingTables & BathTables;
 
 export * from './types/foundation';
 export * from './types/core-records';
 export * from './types/quotes';
+export * from './types/quality';
+export * from './types/billing';
+export * from './types/bath';
 export type { Json, Timestamp, TimestampNullable, DateColumn, Numeric, NumericNullable } from './types/columns';

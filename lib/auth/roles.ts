@@ -29,6 +29,7 @@ export const PERMISSIONS = {
   'plating.estimate': OFFICE,
   'quotes.read': OFFICE,
   'quotes.write': ['owner', 'estimator'],
+  'quotes.price': ['owner', 'estimator'],
   'orders.read': ALL_STAFF,
   'orders.advance': ['owner', 'supervisor', 'plater'],
   'runs.log': ['owner', 'supervisor', 'plater'],
@@ -41,6 +42,7 @@ export const PERMISSIONS = {
   'certificates.issue': ['owner', 'supervisor'],
   'invoices.read': ['owner'],
   'invoices.issue': ['owner'],
+  'reports.read': ['owner'],
   'portal.use': ['customer'],
 } as const satisfies Record<string, readonly Role[]>;
 

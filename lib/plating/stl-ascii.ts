@@ -1,5 +1,5 @@
 import { StlError } from './errors';
-import { MeshAccumulator, type MeshTotals } from './stl-geometry';
+import { MeshAccumulator, RECORD_BYTES, VERTEX_OFFSET, type MeshTotals } from './stl-geometry';
 
 // Streaming reader for ASCII STL. Works on bytes: a token split across chunks is carried in a
 // small fixed buffer, and the free text after "solid"/"endsolid" is skipped, not stored.
@@ -11,6 +11,8 @@ import { MeshAccumulator, type MeshTotals } from './stl-geometry';
 //     endfacet
 //   endsolid name
 // Several solids may follow one another. Keywords are matched without regard to case.
+// Coordinates are rounded to float32, the precision of binary STL, so a file gives the same
+// answer in either form.
 
 const NUMBER = 0; // placeholder in the facet pattern for a number token
 const FACET: readonly (string | typeof NUMBER)[] = [
@@ -22,6 +24,7 @@ const FACET: readonly (string | typeof NUMBER)[] = [
 ];
 const NUMERIC = /^[+-]?(?:\d+\.?\d*|\.\d+)(?:[eE][+-]?\d+)?$/;
 const MAX_TOKEN = 128;
+const FLOAT32_MAX = 3.4028234663852886e38; // coordinates are stored as float32, as in binary STL
 const MAX_NAME_LINE = 4096;
 const UTF8_BOM = [0xef, 0xbb, 0xbf];
 
@@ -39,6 +42,7 @@ export class AsciiStlReader {
   private place: Place = 'before-solid';
   private step = 0; // position in FACET while inside a facet; 0 between facets
   private readonly numbers = new Float64Array(12);
+  private readonly record = new DataView(new ArrayBuffer(RECORD_BYTES));
   private numberCount = 0;
   private line = 1;
   private bomSeen = 0; // bytes of a leading UTF-8 byte-order mark matched so far; −1 once past it
@@ -141,13 +145,16 @@ export class AsciiStlReader {
   private takeNumber(text: string): void {
     if (!NUMERIC.test(text)) this.fail('bad-number', `"${text}" is not a number`);
     const value = Number(text);
-    if (!Number.isFinite(value)) this.fail('non-finite', `"${text}" is too large to be a coordinate`);
+    if (!(Math.abs(value) <= FLOAT32_MAX)) this.fail('non-finite', `"${text}" is too large for an STL coordinate`);
     this.numbers[this.numberCount++] = value;
   }
 
+  // Packs the facet as a binary record (float32, as the binary form of STL stores it).
   private closeFacet(): void {
-    const n = this.numbers; // n[0..2] is the stated normal, not used
-    this.mesh.add(n[3]!, n[4]!, n[5]!, n[6]!, n[7]!, n[8]!, n[9]!, n[10]!, n[11]!);
+    for (let f = 0; f < 9; f++) {
+      this.record.setFloat32(VERTEX_OFFSET + 4 * f, this.numbers[3 + f]!, true); // [0..2]: stated normal
+    }
+    this.mesh.addRecords(this.record, 0, 1);
     this.step = 0;
     this.numberCount = 0;
   }

@@ -1,13 +1,12 @@
 import { StlError } from './errors';
-import { MeshAccumulator, type MeshTotals } from './stl-geometry';
+import { MeshAccumulator, RECORD_BYTES, type MeshTotals } from './stl-geometry';
 
 // Streaming reader for binary STL: an 80-byte header, a little-endian uint32 triangle count, then
 // one 50-byte record per triangle (normal, three vertices as float32, a 2-byte attribute).
 // A record split across chunks is carried in a fixed 50-byte buffer, so memory stays O(1).
 
 export const BINARY_HEADER_BYTES = 84;
-export const BINARY_RECORD_BYTES = 50;
-const FIRST_VERTEX_OFFSET = 12; // the stored normal is ignored: it is recomputed from vertex order
+export const BINARY_RECORD_BYTES = RECORD_BYTES;
 
 export class BinaryStlReader {
   private readonly header = new Uint8Array(BINARY_HEADER_BYTES);
@@ -38,13 +37,15 @@ export class BinaryStlReader {
       this.carryBytes += take;
       pos += take;
       if (this.carryBytes < BINARY_RECORD_BYTES) return;
-      this.readRecord(this.carryView, 0);
+      this.readRecords(this.carryView, 0, 1);
       this.carryBytes = 0;
     }
 
-    const view = new DataView(chunk.buffer, chunk.byteOffset, chunk.byteLength);
-    const lastWhole = chunk.length - BINARY_RECORD_BYTES;
-    for (; pos <= lastWhole; pos += BINARY_RECORD_BYTES) this.readRecord(view, pos);
+    const whole = Math.floor((chunk.length - pos) / BINARY_RECORD_BYTES);
+    if (whole > 0) {
+      this.readRecords(new DataView(chunk.buffer, chunk.byteOffset, chunk.byteLength), pos, whole);
+      pos += whole * BINARY_RECORD_BYTES;
+    }
 
     if (pos < chunk.length) {
       this.carry.set(chunk.subarray(pos), 0);
@@ -63,15 +64,10 @@ export class BinaryStlReader {
     }
   }
 
-  private readRecord(view: DataView, at: number): void {
-    this.checkRoomFor(this.records + 1);
-    this.records++;
-    const o = at + FIRST_VERTEX_OFFSET;
-    this.mesh.add(
-      view.getFloat32(o, true), view.getFloat32(o + 4, true), view.getFloat32(o + 8, true),
-      view.getFloat32(o + 12, true), view.getFloat32(o + 16, true), view.getFloat32(o + 20, true),
-      view.getFloat32(o + 24, true), view.getFloat32(o + 28, true), view.getFloat32(o + 32, true),
-    );
+  private readRecords(view: DataView, at: number, count: number): void {
+    this.checkRoomFor(this.records + count);
+    this.mesh.addRecords(view, at, count);
+    this.records += count;
   }
 
   finish(): MeshTotals {

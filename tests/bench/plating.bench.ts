@@ -139,7 +139,9 @@ export async function run(): Promise<BenchRow[]> {
   }
 }
 
-if (process.argv[1] && path.resolve(process.argv[1]) === path.resolve(__filename)) {
+// Standalone when run directly (tsx runs this file as CommonJS, where __filename exists).
+const self = typeof __filename === 'string' ? __filename : '';
+if (self && process.argv[1] && path.resolve(process.argv[1]) === path.resolve(self)) {
   run().then(
     (rows) => console.table(rows),
     (err) => {

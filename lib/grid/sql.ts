@@ -1,0 +1,150 @@
+// Turns a parsed grid query into SQL fragments over a column whitelist. Only whitelisted
+// expressions ever reach the SQL; every value the client sends is a bound parameter.
+import { type Expression, type RawBuilder, type SqlBool, sql } from 'kysely';
+import type { ColumnFilter, DateCondition, GridColumnType, GridCondition, GridQuery, NumberCondition, TextCondition } from './query';
+
+export type GridColumn = {
+  /** A column reference ('customers.name') or any SQL expression. */
+  expr: string | Expression<unknown>;
+  type: GridColumnType;
+  /** Included in the quick search `q` (compared as text, case-insensitive). */
+  searchable?: boolean;
+  /** Set false for columns without an index when the table can be large. */
+  sortable?: boolean;
+  /** CSV header; defaults to the column id. Set `csv: false` to leave the column out of the export. */
+  header?: string;
+  csv?: boolean;
+};
+
+export type GridColumns = Record<string, GridColumn>;
+
+// Expressions are wrapped in parentheses so `a + b` stays one operand next to `::text` or `<`.
+export function columnExpr(col: GridColumn | undefined): Expression<unknown> {
+  // Parsing checked every column id against the whitelist; reaching here without one is a bug.
+  if (!col) throw new Error('Grid column missing from the whitelist.');
+  return typeof col.expr === 'string' ? sql.ref(col.expr) : sql`(${col.expr})`;
+}
+
+/** Escapes LIKE wildcards so the user's text matches literally (backslash is PostgreSQL's default escape). */
+export function escapeLike(text: string): string {
+  return text.replace(/[\\%_]/g, (c) => `\\${c}`);
+}
+
+const COMPARE: Record<'equals' | 'notEqual' | 'lessThan' | 'lessThanOrEqual' | 'greaterThan' | 'greaterThanOrEqual', string> = {
+  equals: '=',
+  notEqual: '<>',
+  lessThan: '<',
+  lessThanOrEqual: '<=',
+  greaterThan: '>',
+  greaterThanOrEqual: '>=',
+};
+
+function textCondition(e: Expression<unknown>, c: TextCondition): RawBuilder<SqlBool> {
+  const v = escapeLike(c.value);
+  switch (c.op) {
+    case 'blank':
+      return sql<SqlBool>`coalesce(${e}::text, '') = ''`;
+    case 'notBlank':
+      return sql<SqlBool>`coalesce(${e}::text, '') <> ''`;
+    case 'equals':
+      return sql<SqlBool>`${e}::text ilike ${v}`;
+    case 'notEqual':
+      return sql<SqlBool>`coalesce(${e}::text, '') not ilike ${v}`;
+    case 'contains':
+      return sql<SqlBool>`${e}::text ilike ${`%${v}%`}`;
+    case 'notContains':
+      return sql<SqlBool>`coalesce(${e}::text, '') not ilike ${`%${v}%`}`;
+    case 'startsWith':
+      return sql<SqlBool>`${e}::text ilike ${`${v}%`}`;
+    case 'endsWith':
+      return sql<SqlBool>`${e}::text ilike ${`%${v}`}`;
+  }
+}
+
+function numberCondition(e: Expression<unknown>, c: NumberCondition): RawBuilder<SqlBool> {
+  if (c.op === 'blank') return sql<SqlBool>`${e} is null`;
+  if (c.op === 'notBlank') return sql<SqlBool>`${e} is not null`;
+  if (c.op === 'inRange') {
+    const [lo, hi] = [c.value as number, c.to as number].sort((a, b) => a - b);
+    return sql<SqlBool>`${e} between ${lo} and ${hi}`;
+  }
+  return sql<SqlBool>`${e} ${sql.raw(COMPARE[c.op])} ${c.value}`;
+}
+
+// Days as half-open ranges so an index on a timestamp column still serves the filter.
+function dateCondition(e: Expression<unknown>, c: DateCondition): RawBuilder<SqlBool> {
+  if (c.op === 'blank') return sql<SqlBool>`${e} is null`;
+  if (c.op === 'notBlank') return sql<SqlBool>`${e} is not null`;
+  const from = sql`${c.value}::date`;
+  const next = sql`(${c.value}::date + 1)`;
+  switch (c.op) {
+    case 'equals':
+      return sql<SqlBool>`(${e} >= ${from} and ${e} < ${next})`;
+    case 'notEqual':
+      return sql<SqlBool>`(${e} < ${from} or ${e} >= ${next})`;
+    case 'lessThan':
+      return sql<SqlBool>`${e} < ${from}`;
+    case 'lessThanOrEqual':
+      return sql<SqlBool>`${e} < ${next}`;
+    case 'greaterThan':
+      return sql<SqlBool>`${e} >= ${next}`;
+    case 'greaterThanOrEqual':
+      return sql<SqlBool>`${e} >= ${from}`;
+    case 'inRange': {
+      const [lo, hi] = [c.value as string, c.to as string].sort();
+      return sql<SqlBool>`(${e} >= ${lo}::date and ${e} < (${hi}::date + 1))`;
+    }
+  }
+}
+
+export function conditionSql(e: Expression<unknown>, c: GridCondition): RawBuilder<SqlBool> {
+  if (c.kind === 'text') return textCondition(e, c);
+  if (c.kind === 'number') return numberCondition(e, c);
+  return dateCondition(e, c);
+}
+
+function filterSql(columns: GridColumns, f: ColumnFilter): RawBuilder<SqlBool> {
+  const e = columnExpr(columns[f.colId]);
+  const parts = f.conditions.map((c) => conditionSql(e, c));
+  return sql<SqlBool>`(${sql.join(parts, sql.raw(f.join === 'OR' ? ' or ' : ' and '))})`;
+}
+
+function searchSql(columns: GridColumns, words: string[]): RawBuilder<SqlBool> | null {
+  const cols = Object.values(columns).filter((c) => c.searchable);
+  if (cols.length === 0 || words.length === 0) return null;
+  const perWord = words.map((w) => {
+    const pattern = `%${escapeLike(w)}%`;
+    return sql<SqlBool>`(${sql.join(
+      cols.map((c) => sql`${columnExpr(c)}::text ilike ${pattern}`),
+      sql.raw(' or '),
+    )})`;
+  });
+  return sql<SqlBool>`(${sql.join(perWord, sql.raw(' and '))})`;
+}
+
+/** The WHERE condition for the query's filters and quick search, or null when there is none. */
+export function whereSql(columns: GridColumns, query: Pick<GridQuery, 'filters' | 'words'>): RawBuilder<SqlBool> | null {
+  const parts = query.filters.map((f) => filterSql(columns, f));
+  const search = searchSql(columns, query.words);
+  if (search) parts.push(search);
+  return parts.length ? sql<SqlBool>`${sql.join(parts, sql.raw(' and '))}` : null;
+}
+
+/**
+ * The ORDER BY terms: the chosen column, then a unique key so pages never overlap or skip rows
+ * when sort values tie. No NULLS FIRST/LAST: the default ordering lets a plain btree index serve
+ * both directions.
+ */
+export function orderSql(
+  columns: GridColumns,
+  sort: GridQuery['sort'],
+  fallback: { colId: string; dir: 'asc' | 'desc' } | null,
+  key: string | Expression<unknown>,
+): RawBuilder<unknown>[] {
+  const chosen = sort ?? fallback;
+  const keyExpr = typeof key === 'string' ? sql.ref(key) : key;
+  const terms: RawBuilder<unknown>[] = [];
+  if (chosen) terms.push(sql`${columnExpr(columns[chosen.colId])} ${sql.raw(chosen.dir)}`);
+  terms.push(sql`${keyExpr} ${sql.raw(chosen?.dir ?? 'asc')}`);
+  return terms;
+}

@@ -1,0 +1,264 @@
+// A quote line's price, built up cost by cost from the engine's job estimate. Pure.
+//
+// Rounding rule (applied everywhere, stated once): each cost component is computed exactly and
+// rounded half-up to whole cents; the subtotal is the sum of the rounded components; margin and
+// the rush uplift are computed from whole-cent figures and rounded half-up to whole cents; unit
+// prices (per piece, per basis) are the line total divided out and rounded half-up to 4 decimal
+// places of a cent. A value within a millionth of a cent below a half counts as the half, so
+// binary floating-point noise cannot flip a rounding.
+import { estimateJob, PlatingInputError, type JobEstimate } from '@/lib/plating';
+import type { PricingBasis } from '@/db/types';
+import { basisQuantity, roundUnitCents, unitPriceCents, type BasisFacts } from './basis';
+import { bakeDecision, type BakeDecision } from './bake-rule';
+
+export type PricedPart = { areaDm2: number; weightG: number | null; hardnessHrc: number | null; tensileMpa: number | null };
+
+export type PricedFinish = {
+  element: string;
+  ionCharge: number;
+  minThicknessUm: number;
+  method: 'rack' | 'barrel';
+  currentDensityAdm2: number;
+  efficiency: number;
+  distributionRatio: number;
+  tankVolts: number;
+  partsPerLoad: number;
+  handlingMinutesPerLoad: number;
+  maskingPerPieceCents: number;
+  bakeRequired: boolean;
+  bakeThresholdHrc: number | null;
+};
+
+/** What the shop's tank and practice add to the finish (see process.ts for where each comes from). */
+export type ShopProcess = {
+  rectifierMaxA: number;
+  rectifierEfficiency: number;
+  dragOutLPerM2: number;
+  bathMetalGPerL: number;
+  anodeLossPercent: number;
+  anodes: 'soluble' | 'insoluble';
+};
+
+export type PricingRates = {
+  labourPerHourCents: number;
+  tankHourRackCents: number;
+  tankHourBarrelCents: number;
+  metalPerKgCents: Record<string, number>;
+  additivesPerKahCents: number;
+  powerPerKwhCents: number;
+  bakePerLoadCents: number;
+  lotChargeCents: number;
+  minimumChargeCents: number;
+  rushMultiplierPct: number;
+  marginPct: number;
+};
+
+export type PricingInput = {
+  part: PricedPart;
+  finish: PricedFinish;
+  process: ShopProcess;
+  rates: PricingRates;
+  quantity: number;
+  isRush: boolean;
+  basis: PricingBasis;
+};
+
+export type CostKey = 'metal' | 'additives' | 'power' | 'labour' | 'tankTime' | 'masking' | 'bake';
+
+/** One row of the build-up: quantity × rate = cents. */
+export type CostComponent = { key: CostKey; label: string; quantity: number; unit: string; rateCents: number; exactCents: number; cents: number };
+
+export type JobSummary = {
+  loads: number;
+  partsPerLoad: number;
+  loadLimitedBy: 'capacity' | 'rectifier';
+  averageThicknessUm: number;
+  minimumThicknessUm: number;
+  distributionRatio: number;
+  ampHours: number;
+  minutesPerLoad: number;
+  tankHours: number;
+  labourHours: number;
+  metalKg: number;
+  acKWh: number;
+  areaPerLotDm2: number;
+};
+
+export type LinePrice = {
+  components: CostComponent[];
+  subtotalCents: number;
+  marginPct: number;
+  marginCents: number;
+  lotChargeCents: number;
+  beforeMinimumCents: number;
+  minimumChargeCents: number;
+  minimumApplied: boolean;
+  rushMultiplierPct: number;
+  rushCents: number;
+  totalCents: number;
+  perPieceCents: number;
+  basis: PricingBasis;
+  basisQuantity: number;
+  unitPriceCents: number;
+  bake: BakeDecision;
+  job: JobSummary;
+  cautions: string[];
+};
+
+/** Half-up to whole cents (see the rounding rule above). */
+export function roundCents(exact: number): number {
+  if (!Number.isFinite(exact) || exact < 0) throw new PlatingInputError('cost', `A cost must be a finite amount of at least zero; got ${exact}.`);
+  const cents = Math.floor(exact + 0.5 + 1e-6);
+  if (!Number.isSafeInteger(cents)) throw new PlatingInputError('cost', 'The amount is too large to price; check the quantity and rates.');
+  return cents;
+}
+
+/** A whole-cent amount times a whole percentage, rounded half-up, in integer arithmetic. */
+export function percentOf(cents: number, pct: number): number {
+  return Math.floor((cents * pct + 50) / 100);
+}
+
+function requireCents(field: string, label: string, value: unknown): number {
+  if (typeof value !== 'number' || !Number.isSafeInteger(value) || value < 0) {
+    throw new PlatingInputError(field, `${label} must be a whole number of cents, at least 0; got ${String(value)}.`);
+  }
+  return value;
+}
+
+function requirePct(field: string, label: string, value: unknown, min: number, max: number): number {
+  if (typeof value !== 'number' || !Number.isInteger(value) || value < min || value > max) {
+    throw new PlatingInputError(field, `${label} must be a whole percentage from ${min} to ${max}; got ${String(value)}.`);
+  }
+  return value;
+}
+
+function checkRates(r: PricingRates, element: string): number {
+  for (const [field, label] of [
+    ['labourPerHourCents', 'Labour rate'],
+    ['tankHourRackCents', 'Rack tank-hour rate'],
+    ['tankHourBarrelCents', 'Barrel tank-hour rate'],
+    ['additivesPerKahCents', 'Salts and additives rate'],
+    ['powerPerKwhCents', 'Power price'],
+    ['bakePerLoadCents', 'Bake charge'],
+    ['lotChargeCents', 'Lot charge'],
+    ['minimumChargeCents', 'Minimum charge'],
+  ] as const) {
+    requireCents(field, label, r[field]);
+  }
+  requirePct('marginPct', 'Margin', r.marginPct, 0, 500);
+  requirePct('rushMultiplierPct', 'Rush multiplier', r.rushMultiplierPct, 100, 500);
+  const metal = r.metalPerKgCents[element];
+  if (metal === undefined) {
+    throw new PlatingInputError('metalPerKgCents', `The rate set has no metal price for ${element}. Add one under Rates before pricing this finish.`);
+  }
+  return requireCents('metalPerKgCents', `Metal price for ${element}`, metal);
+}
+
+function estimateFor(input: PricingInput): JobEstimate {
+  const { part, finish, process } = input;
+  return estimateJob({
+    areaPerPartDm2: part.areaDm2,
+    quantity: input.quantity,
+    minimumThicknessUm: finish.minThicknessUm,
+    process: {
+      element: finish.element,
+      charge: finish.ionCharge,
+      currentDensityAdm2: finish.currentDensityAdm2,
+      efficiency: finish.efficiency,
+      loading: finish.method,
+      distributionRatio: finish.distributionRatio,
+      partsPerLoad: finish.partsPerLoad,
+      tankVolts: finish.tankVolts,
+      rectifierMaxA: process.rectifierMaxA,
+      rectifierEfficiency: process.rectifierEfficiency,
+      dragOutLPerM2: process.dragOutLPerM2,
+      bathMetalGPerL: process.bathMetalGPerL,
+      anodes: process.anodes,
+      anodeLossPercent: process.anodeLossPercent,
+    },
+  });
+}
+
+function component(key: CostKey, label: string, quantity: number, unit: string, rateCents: number): CostComponent {
+  const exactCents = quantity * rateCents;
+  return { key, label, quantity, unit, rateCents, exactCents, cents: roundCents(exactCents) };
+}
+
+export function priceLine(input: PricingInput): LinePrice {
+  const { part, finish, rates } = input;
+  const metalRate = checkRates(rates, finish.element);
+  requireCents('maskingPerPieceCents', 'Masking charge', finish.maskingPerPieceCents);
+  if (!(finish.handlingMinutesPerLoad >= 0) || !Number.isFinite(finish.handlingMinutesPerLoad)) {
+    throw new PlatingInputError('handlingMinutesPerLoad', 'Handling minutes per load must be a finite number of at least 0.');
+  }
+  const e = estimateFor(input);
+  const n = e.nominal;
+  const bake = bakeDecision({
+    finishRequiresBake: finish.bakeRequired,
+    finishThresholdHrc: finish.bakeThresholdHrc,
+    hardnessHrc: part.hardnessHrc,
+    tensileMpa: part.tensileMpa,
+  });
+  const tankHours = n.totalTankMinutes / 60;
+  const labourHours = (e.loads * finish.handlingMinutesPerLoad) / 60;
+  const metalKg = n.metal.totalG / 1000;
+  const tankRate = finish.method === 'rack' ? rates.tankHourRackCents : rates.tankHourBarrelCents;
+
+  const components: CostComponent[] = [
+    component('metal', 'Metal', metalKg, 'kg', metalRate),
+    component('additives', 'Salts and additives', n.ampHoursLot / 1000, 'kA·h', rates.additivesPerKahCents),
+    component('power', 'Power', n.energy.acKWh, 'kWh', rates.powerPerKwhCents),
+    component('labour', 'Labour (loads × handling minutes)', labourHours, 'h', rates.labourPerHourCents),
+    component('tankTime', `Tank time (${finish.method})`, tankHours, 'tank-h', tankRate),
+    component('masking', 'Masking', input.quantity, 'pc', finish.maskingPerPieceCents),
+    component('bake', 'Relief bake', bake.applies ? e.loads : 0, 'load', rates.bakePerLoadCents),
+  ];
+
+  const subtotalCents = components.reduce((s, c) => s + c.cents, 0);
+  const marginCents = percentOf(subtotalCents, rates.marginPct);
+  const beforeMinimumCents = subtotalCents + marginCents + rates.lotChargeCents;
+  const minimumApplied = beforeMinimumCents < rates.minimumChargeCents;
+  const afterMinimum = minimumApplied ? rates.minimumChargeCents : beforeMinimumCents;
+  const rushMultiplierPct = input.isRush ? rates.rushMultiplierPct : 100;
+  const rushCents = percentOf(afterMinimum, rushMultiplierPct - 100);
+  const totalCents = afterMinimum + rushCents;
+  if (!Number.isSafeInteger(totalCents)) throw new PlatingInputError('quantity', 'The line total is too large to price; check the quantity and rates.');
+
+  const facts: BasisFacts = { quantity: input.quantity, areaPerPartDm2: part.areaDm2, weightPerPartG: part.weightG, loads: e.loads };
+  const unitPrice = unitPriceCents(totalCents, input.basis, facts);
+
+  return {
+    components,
+    subtotalCents,
+    marginPct: rates.marginPct,
+    marginCents,
+    lotChargeCents: rates.lotChargeCents,
+    beforeMinimumCents,
+    minimumChargeCents: rates.minimumChargeCents,
+    minimumApplied,
+    rushMultiplierPct,
+    rushCents,
+    totalCents,
+    perPieceCents: roundUnitCents(totalCents / input.quantity),
+    basis: input.basis,
+    basisQuantity: basisQuantity(input.basis, facts),
+    unitPriceCents: unitPrice,
+    bake,
+    job: {
+      loads: e.loads,
+      partsPerLoad: e.partsPerLoad,
+      loadLimitedBy: e.loadLimitedBy,
+      averageThicknessUm: e.averageThicknessUm,
+      minimumThicknessUm: e.minimumThicknessUm,
+      distributionRatio: e.distributionRatio,
+      ampHours: n.ampHoursLot,
+      minutesPerLoad: n.minutesPerLoad,
+      tankHours,
+      labourHours,
+      metalKg,
+      acKWh: n.energy.acKWh,
+      areaPerLotDm2: e.areaPerLotDm2,
+    },
+    cautions: e.cautions,
+  };
+}
