@@ -11,7 +11,7 @@ import type { BenchRow } from './types';
 const SEGMENTS = 1000; // a UV sphere of 1000 segments × 501 bands has 2·1000·500 = 1,000,000 triangles
 const BANDS = 501;
 const CHUNK_BYTES = 1 << 20;
-const RUNS = 3;
+const RUNS = 5;
 const MB = 1024 * 1024;
 
 async function writeStl(file: string): Promise<{ bytes: number; triangles: number }> {

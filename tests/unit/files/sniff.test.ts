@@ -45,7 +45,7 @@ describe('sniffKind', () => {
   it('reads UTF-8 text as CSV when named .csv, else as plain text', () => {
     expect(sniff(CSV, 'customers.csv')).toBe('csv');
     expect(sniff(CSV, 'customers')).toBe('text');
-    expect(sniff(bytes('Größe;Maß\n'), 'a.csv')).toBe('csv');
+    expect(sniff(new TextEncoder().encode('Größe;Maß\n'), 'a.csv')).toBe('csv');
   });
 
   it('refuses bytes that are no known kind', () => {
