@@ -74,7 +74,7 @@ export {
   type Mesh,
   type Triangle,
 } from './stl-mesh';
-export { parseFormula, molarMass, massFraction, type Composition } from './formula';
+export { parseFormula, molarMass, metalFraction, FormulaError, type ElementCounts } from '../chemistry/formula';
 export {
   DISTRIBUTION_RATIO_DEFAULTS,
   averageThicknessUm,

@@ -1,5 +1,5 @@
 import { PlatingInputError } from './errors';
-import { massFraction } from './formula';
+import { FormulaError, metalFraction } from '../chemistry/formula';
 import {
   requireFraction,
   requireFiniteResults,
@@ -118,8 +118,15 @@ export function saltForMetal(input: { metalG: number; saltFormula: string; eleme
   metalFraction: number;
 } {
   const metalG = requireNonNegative('metalG', 'Metal needed (g)', input.metalG);
-  const metalFraction = massFraction(input.saltFormula, input.element);
-  return { saltG: metalG / metalFraction, metalFraction };
+  let fraction: number;
+  try {
+    fraction = metalFraction(input.saltFormula, input.element);
+  } catch (err) {
+    // One error type out of the engine: the chemistry module's message, named for its field.
+    if (err instanceof FormulaError) throw new PlatingInputError(err.fieldErrors?.element ? 'element' : 'formula', err.message);
+    throw err;
+  }
+  return { saltG: metalG / fraction, metalFraction: fraction };
 }
 
 export type EnergyInput = { tankVolts: number; ampHours: number; rectifierEfficiency: number };

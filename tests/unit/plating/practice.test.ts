@@ -4,51 +4,23 @@ import {
   PlatingInputError,
   averageThicknessUm,
   energyKWh,
-  massFraction,
   metalConsumed,
-  molarMass,
-  parseFormula,
   planLoads,
   saltForMetal,
 } from '@/lib/plating';
 import { catchError } from './catch-error';
 
-describe('salt metal fractions from IUPAC atomic weights', () => {
-  // Source: reference sheet §5, "Metal-content fraction of a salt" (w = M_metal/M_salt).
-  it.each<[string, string, number]>([
-    ['NiSO4·6H2O', 'Ni', 22.33],
-    ['NiSO4·7H2O', 'Ni', 20.9],
-    ['NiCl2·6H2O', 'Ni', 24.69],
-    ['Ni(SO3NH2)2·4H2O', 'Ni', 18.18],
-    ['CuSO4·5H2O', 'Cu', 25.45],
-    ['CuCN', 'Cu', 70.95],
-    ['ZnO', 'Zn', 80.34],
-    ['ZnCl2', 'Zn', 47.97],
-    ['ZnSO4·7H2O', 'Zn', 22.74],
-    ['SnSO4', 'Sn', 55.27],
-    ['K2SnO3·3H2O', 'Sn', 39.71],
-    ['Na2SnO3·3H2O', 'Sn', 44.51],
-    ['AgCN', 'Ag', 80.57],
-    ['KAg(CN)2', 'Ag', 54.2],
-    ['KAu(CN)2', 'Au', 68.37],
-    ['CrO3', 'Cr', 52.0],
-  ])('%s is %d %% %s', (formula, element, percent) => {
-    expect(massFraction(formula, element) * 100).toBeCloseTo(percent, 2);
+describe('salt needed for a mass of metal', () => {
+  // Salt fractions themselves are checked in tests/unit/chemistry/formula.test.ts.
+  it('divides the metal by the salt metal fraction (reference §5: 16.0 kg Ni → 71.65 kg NiSO₄·6H₂O)', () => {
+    // Source: reference sheet §5, "Addition when the analysis is metal but you add a salt".
+    const r = saltForMetal({ metalG: 16_000, saltFormula: 'NiSO4·6H2O', element: 'Ni' });
+    expect(r.metalFraction * 100).toBeCloseTo(22.33, 2);
+    expect(r.saltG / 1000).toBeCloseTo(71.65, 1);
   });
 
-  it('reads molar masses of §5 and §4 salts', () => {
-    // Source: reference §5 (NiSO₄·6H₂O 262.84, NiCl₂·6H₂O 237.68) and §4.2 (sulfamate 322.91).
-    expect(molarMass('NiSO4·6H2O')).toBeCloseTo(262.84, 2);
-    expect(molarMass('NiCl₂·6H₂O')).toBeCloseTo(237.68, 2);
-    expect(molarMass('Ni(SO3NH2)2.4H2O')).toBeCloseTo(322.91, 2);
-    expect(parseFormula('K[Au(CN)2]').get('N')).toBe(2);
-  });
-
-  it('refuses unreadable formulas and absent metals', () => {
-    for (const bad of ['', 'Xx2O', 'Ni(SO4', 'NiSO4)', 'ni', 'H0', 'NiSO4··H2O']) {
-      expect(catchError(() => parseFormula(bad))).toMatchObject({ field: 'formula' });
-    }
-    expect(catchError(() => massFraction('CuSO4', 'Ni'))).toMatchObject({ field: 'element' });
+  it('refuses a negative amount of metal', () => {
+    expect(catchError(() => saltForMetal({ metalG: -1, saltFormula: 'NiSO4·6H2O', element: 'Ni' }))).toMatchObject({ field: 'metalG' });
   });
 });
 
