@@ -1,0 +1,139 @@
+// The access matrix, generated from the code: every page, route handler and server action ×
+// every role and a signed-out visitor → allowed or refused, asserted over HTTP against `next start`.
+// Permissions come from the code itself (requirePageUser / withPermission / formAction); a route
+// that asks for none must be listed in PUBLIC below, or this test fails.
+import { randomBytes } from 'node:crypto';
+import pg from 'pg';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { type Permission, roleCan } from '@/lib/auth/roles';
+import type { Role } from '@/db/types';
+import { APP_URL } from '../helpers/browser';
+import { TEST_DATABASE_URL } from '../helpers/test-db';
+import { type ActionRoute, type ApiRoute, type Guard, type PageRoute, discoverActions, discoverApiRoutes, discoverPages, sampleUrl } from '../helpers/routes';
+
+type Caller = Role | 'anonymous';
+const CALLERS: Caller[] = ['anonymous', 'owner', 'estimator', 'plater', 'supervisor', 'customer'];
+const DEMO_USER: Record<Role, string> = {
+  owner: 'demo-owner-owner',
+  estimator: 'demo-estimator-estimator',
+  plater: 'demo-plater-plater',
+  supervisor: 'demo-supervisor-supervisor',
+  customer: 'demo-customer-buyer',
+};
+
+// Routes that deliberately ask for no permission, and what everyone gets from them.
+const PUBLIC: Record<string, 'page' | 'redirect' | 'json' | 'signature' | 'any-session'> = {
+  'page /': 'redirect',
+  'page /sign-in': 'page',
+  'page /reset': 'page',
+  'page /set-password/[token]': 'page',
+  'GET /api/health': 'json',
+  'POST /api/webhooks/stripe': 'signature',
+  'action signOutAction': 'any-session',
+};
+
+const pages = discoverPages();
+const apis = discoverApiRoutes();
+const actions = discoverActions(process.env.NEXT_DIST_DIR ?? '.next-test');
+const cookies = new Map<Caller, string>();
+const client = new pg.Client({ connectionString: TEST_DATABASE_URL });
+
+beforeAll(async () => {
+  await client.connect();
+  for (const role of Object.keys(DEMO_USER) as Role[]) {
+    const id = randomBytes(20).toString('hex');
+    await client.query(`insert into sessions (id, user_id, expires_at) values ($1, $2, now() + interval '1 hour')`, [id, DEMO_USER[role]]);
+    cookies.set(role, `ampwright_session=${id}`);
+  }
+});
+afterAll(async () => {
+  await client.query(`delete from sessions where id = any($1)`, [[...cookies.values()].map((c) => c.split('=')[1])]);
+  await client.end();
+});
+
+function allowed(guard: Guard, caller: Caller): boolean {
+  return guard.kind === 'permission' && caller !== 'anonymous' && roleCan(caller, guard.permission as Permission);
+}
+
+async function request(caller: Caller, url: string, init: RequestInit = {}): Promise<Response> {
+  const headers = new Headers(init.headers);
+  const cookie = cookies.get(caller);
+  if (cookie) headers.set('cookie', cookie);
+  return fetch(`${APP_URL}${url}`, { ...init, headers, redirect: 'manual' });
+}
+
+describe('every route is in the matrix', () => {
+  it('finds routes of all three kinds', () => {
+    expect(pages.length).toBeGreaterThan(5);
+    expect(apis.length).toBeGreaterThan(0);
+    expect(actions.length).toBeGreaterThan(3);
+  });
+  it('no route is unguarded unless it is listed as public', () => {
+    const unlisted = [
+      ...pages.filter((p) => p.guard.kind === 'unguarded' && !PUBLIC[`page ${p.pattern}`]).map((p) => `page ${p.pattern} (${p.file})`),
+      ...apis.filter((a) => a.guard.kind === 'unguarded' && !PUBLIC[`${a.method} ${a.pattern}`]).map((a) => `${a.method} ${a.pattern} (${a.file})`),
+      ...actions.filter((a) => a.guard.kind === 'unguarded' && !PUBLIC[`action ${a.name}`]).map((a) => `action ${a.name} (${a.file})`),
+    ];
+    expect(unlisted).toEqual([]);
+  });
+});
+
+describe('pages', () => {
+  it.each(pages.filter((p) => p.guard.kind === 'permission').map((p) => [p.pattern, p] as const))('%s', async (_pattern, page: PageRoute) => {
+    const url = sampleUrl(page.pattern);
+    for (const caller of CALLERS) {
+      const res = await request(caller, url);
+      const where = `${caller} GET ${url}`;
+      if (caller === 'anonymous') {
+        expect(res.status, where).toBe(307);
+        expect(res.headers.get('location') ?? '', where).toMatch(/\/sign-in/);
+      } else if (allowed(page.guard, caller)) expect([200, 404], where).toContain(res.status);
+      else expect(res.status, where).toBe(403);
+    }
+  });
+
+  it.each(pages.filter((p) => p.guard.kind !== 'permission').map((p) => [p.pattern, p] as const))('%s (public)', async (_pattern, page: PageRoute) => {
+    for (const caller of CALLERS) {
+      const res = await request(caller, sampleUrl(page.pattern));
+      expect(res.status, `${caller} ${page.pattern}`).toBeLessThan(500);
+    }
+  });
+});
+
+describe('route handlers', () => {
+  it.each(apis.map((a) => [`${a.method} ${a.pattern}`, a] as const))('%s', async (_name, api: ApiRoute) => {
+    const url = sampleUrl(api.pattern);
+    const init: RequestInit =
+      api.method === 'GET' ? {} : { method: api.method, body: '{}', headers: { 'content-type': 'application/json', origin: APP_URL } };
+    for (const caller of CALLERS) {
+      const res = await request(caller, url, init);
+      const where = `${caller} ${api.method} ${url}`;
+      expect(res.status, where).toBeLessThan(500);
+      const kind = PUBLIC[`${api.method} ${api.pattern}`];
+      if (kind === 'signature') expect(res.status, where).toBe(400);
+      else if (kind) expect(res.status, where).toBe(200);
+      else if (caller === 'anonymous') expect(res.status, where).toBe(401);
+      else if (allowed(api.guard, caller)) expect([401, 403], where).not.toContain(res.status);
+      else expect(res.status, where).toBe(403);
+    }
+  });
+});
+
+describe('server actions', () => {
+  it.each(actions.filter((a) => a.guard.kind === 'permission').map((a) => [`${a.name} (${a.file})`, a] as const))('%s', async (_name, action: ActionRoute) => {
+    for (const caller of CALLERS) {
+      const form = new FormData();
+      form.append('0', '[{},"$K1"]'); // (previous state, form data) as React encodes them
+      form.append('1_probe', 'x');
+      const res = await request(caller, sampleUrl(action.pagePattern), { method: 'POST', body: form, headers: { 'next-action': action.id, origin: APP_URL } });
+      const body = await res.text();
+      const where = `${caller} → ${action.name}`;
+      expect(res.status, where).toBeLessThan(500);
+      if (caller === 'anonymous') expect(body, where).toContain('Please sign in.');
+      else if (allowed(action.guard, caller)) {
+        expect(body, where).not.toContain('You are not allowed to do this.');
+        expect(body, where).not.toContain('Please sign in.');
+      } else expect(body, where).toContain('You are not allowed to do this.');
+    }
+  });
+});
