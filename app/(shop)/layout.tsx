@@ -7,12 +7,13 @@ import { loadLayoutUser } from '@/components/shell/load-user';
 import { UserMenu } from '@/components/shell/user-menu';
 import { isDemoMode } from '@/lib/email/mailbox';
 import { navFor, STAFF_NAV } from '@/lib/nav';
+import { resolveNavBadges } from '@/lib/bath/nav-badge';
 
 export default async function ShopLayout({ children }: { children: ReactNode }) {
   const user = await loadLayoutUser();
   if (user === 'unavailable') return <DatabaseUnavailable />;
   if (user.role === 'customer') forbidden();
-  const items = navFor(user.role, STAFF_NAV, { demoMode: isDemoMode() });
+  const items = await resolveNavBadges(navFor(user.role, STAFF_NAV, { demoMode: isDemoMode() }));
   return (
     <div className="min-h-screen md:flex">
       <AppNav

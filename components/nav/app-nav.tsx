@@ -11,6 +11,10 @@ export type NavItem = {
   icon?: ReactNode;
   /** Light up only on this exact path, not on pages below it (for an area's overview item). */
   exact?: boolean;
+  /** A small count after the label (e.g. open alerts); hidden when zero or absent. */
+  badge?: number;
+  /** What the count is, for screen readers (e.g. "open alerts"). */
+  badgeLabel?: string;
 };
 
 export type AppNavProps = {
@@ -118,6 +122,12 @@ export function AppNav({ items, currentPath, label = 'Main', brand, footer, vari
                     </span>
                   ) : null}
                   <span className="truncate">{item.label}</span>
+                  {item.badge ? (
+                    <span className="ml-auto inline-flex min-w-5 items-center justify-center rounded-full bg-out px-1.5 text-xs font-semibold text-white tabular">
+                      {item.badge}
+                      {item.badgeLabel ? <span className="sr-only"> {item.badgeLabel}</span> : null}
+                    </span>
+                  ) : null}
                 </Link>
               </li>
             );

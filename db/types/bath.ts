@@ -29,8 +29,8 @@ export type TankAnalytesTable = {
   basis: Generated<string>;
   sort_order: Generated<number>;
   is_active: Generated<boolean>;
-  created_at: Generated<Timestamp>;
-  updated_at: Generated<Timestamp>;
+  created_at: Timestamp;
+  updated_at: Timestamp;
 };
 
 export type AnalyteLimitChangesTable = {
@@ -40,7 +40,7 @@ export type AnalyteLimitChangesTable = {
   reason: string;
   before: Json<Record<string, number | null>>;
   after: Json<Record<string, number | null>>;
-  created_at: Generated<Timestamp>;
+  created_at: Timestamp;
 };
 
 export type AnalysesTable = {
@@ -61,7 +61,7 @@ export type AnalysesTable = {
   idempotency_key: string;
   supersedes_id: string | null;
   note: Generated<string>;
-  created_at: Generated<Timestamp>;
+  created_at: Timestamp;
 };
 
 export type AdditionsTable = {
@@ -80,7 +80,7 @@ export type AdditionsTable = {
   made_by: string;
   idempotency_key: string;
   supersedes_id: string | null;
-  created_at: Generated<Timestamp>;
+  created_at: Timestamp;
 };
 
 export type MeterReadingsTable = {
@@ -92,7 +92,7 @@ export type MeterReadingsTable = {
   idempotency_key: string;
   supersedes_id: string | null;
   note: Generated<string>;
-  created_at: Generated<Timestamp>;
+  created_at: Timestamp;
 };
 
 export type HullCellPanelsTable = {
@@ -105,7 +105,7 @@ export type HullCellPanelsTable = {
   made_at: Timestamp;
   made_by: string;
   idempotency_key: string;
-  created_at: Generated<Timestamp>;
+  created_at: Timestamp;
 };
 
 export type BathAlertsTable = {
@@ -119,8 +119,8 @@ export type BathAlertsTable = {
   message: string;
   detail: Json<Record<string, unknown>>;
   occurrences: Generated<number>;
-  raised_at: Generated<Timestamp>;
-  last_seen_at: Generated<Timestamp>;
+  raised_at: Timestamp;
+  last_seen_at: Timestamp;
   escalated_at: TimestampNullable;
   acknowledged_at: TimestampNullable;
   acknowledged_by: string | null;
@@ -132,7 +132,7 @@ export type BathAlertEmailsTable = {
   kind: AlertEmailKind;
   recipient: string;
   status: Generated<'pending' | 'sent' | 'failed'>;
-  created_at: Generated<Timestamp>;
+  created_at: Timestamp;
   sent_at: TimestampNullable;
 };
 

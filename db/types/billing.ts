@@ -30,8 +30,8 @@ export type InvoicesTable = {
   rounding_rule: string;
   issued_by: string | null;
   emailed_at: TimestampNullable;
-  created_at: Generated<Timestamp>;
-  updated_at: Generated<Timestamp>;
+  created_at: Timestamp;
+  updated_at: Timestamp;
 };
 
 export type InvoiceLinesTable = {
@@ -56,7 +56,7 @@ export type CreditNotesTable = {
   reason: string;
   issued_on: DateColumn;
   issued_by: string | null;
-  created_at: Generated<Timestamp>;
+  created_at: Timestamp;
 };
 
 export type PaymentsTable = {
@@ -67,13 +67,13 @@ export type PaymentsTable = {
   method: PaymentMethod;
   amount_cents: number;
   currency: Generated<string>;
-  received_at: Generated<Timestamp>;
+  received_at: Timestamp;
   reference: Generated<string>;
   stripe_payment_intent_id: string | null;
   stripe_charge_id: string | null;
   stripe_refund_key: string | null;
   recorded_by: string | null;
-  created_at: Generated<Timestamp>;
+  created_at: Timestamp;
 };
 
 export type StripeEventsTable = {
@@ -82,7 +82,7 @@ export type StripeEventsTable = {
   invoice_id: string | null;
   outcome: string;
   stripe_created_at: Timestamp;
-  received_at: Generated<Timestamp>;
+  received_at: Timestamp;
 };
 
 export type InvoiceCheckoutsTable = {
@@ -93,14 +93,14 @@ export type InvoiceCheckoutsTable = {
   url: string;
   expires_at: Timestamp;
   created_by: string | null;
-  created_at: Generated<Timestamp>;
+  created_at: Timestamp;
 };
 
 export type InvoiceRemindersTable = {
   invoice_id: string;
   stage: ReminderStage;
   sent_to: string;
-  sent_at: Generated<Timestamp>;
+  sent_at: Timestamp;
 };
 
 export type BillingTables = {

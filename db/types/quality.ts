@@ -2,6 +2,9 @@
 import type { Generated, Selectable } from 'kysely';
 import type { Json, Numeric, NumericNullable, Timestamp, TimestampNullable } from './columns';
 
+// Defaulted timestamps use Timestamp (its insert type allows undefined) rather than Generated<…>,
+// which would select as the column-type wrapper instead of Date.
+
 /** ASTM method numbers for coating thickness. */
 export type ThicknessMethod = 'B568' | 'B499' | 'B244' | 'B504' | 'B487' | 'B567';
 export type ReadingStatusColumn = 'pass' | 'below_minimum' | 'above_maximum';
@@ -14,7 +17,7 @@ export type SamplingPlansTable = {
   source: Generated<string>;
   is_active: Generated<boolean>;
   created_by: string | null;
-  created_at: Generated<Timestamp>;
+  created_at: Timestamp;
 };
 
 export type SamplingPlanRowsTable = {
@@ -40,7 +43,7 @@ export type ThicknessReadingsTable = {
   upload_id: string | null;
   source_file_id: string | null;
   recorded_by: string | null;
-  recorded_at: Generated<Timestamp>;
+  recorded_at: Timestamp;
   voided_at: TimestampNullable;
   voided_by: string | null;
   void_reason: string | null;
@@ -68,7 +71,7 @@ export type BakeRecordsTable = {
   reasons: Json<StoredBakeReason[]>;
   notes: Generated<string>;
   recorded_by: string | null;
-  recorded_at: Generated<Timestamp>;
+  recorded_at: Timestamp;
   disposition_reason: string | null;
   disposition_by: string | null;
   disposition_at: TimestampNullable;
@@ -78,7 +81,7 @@ export type BakeWindowAlertsTable = {
   work_order_id: string;
   deadline_at: Timestamp;
   sent_to: Generated<string[]>;
-  sent_at: Generated<Timestamp>;
+  sent_at: Timestamp;
 };
 
 export type NonconformancesTable = {
@@ -87,7 +90,7 @@ export type NonconformancesTable = {
   source: NonconformanceSource;
   description: string;
   opened_by: string | null;
-  opened_at: Generated<Timestamp>;
+  opened_at: Timestamp;
   disposition: Disposition | null;
   customer_approval_ref: string | null;
   disposition_note: string | null;
@@ -105,7 +108,7 @@ export type CertificatesTable = {
   pdf_file_id: string;
   signed_by: string | null;
   signed_by_name: string;
-  signed_at: Generated<Timestamp>;
+  signed_at: Timestamp;
 };
 
 export type QualityTables = {

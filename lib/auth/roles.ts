@@ -40,6 +40,7 @@ export const PERMISSIONS = {
   'quality.read': ALL_STAFF,
   'quality.record': ['owner', 'supervisor', 'plater'],
   'certificates.issue': ['owner', 'supervisor'],
+  'quality.disposition': ['owner', 'supervisor'],
   'invoices.read': ['owner'],
   'invoices.issue': ['owner'],
   'reports.read': ['owner'],

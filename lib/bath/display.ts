@@ -2,7 +2,7 @@
 // safe in the browser. Values are stored in the analysis method's unit (g/L, °C, mL/L, pH …); only
 // the quantities the units module knows are converted (g/L ↔ oz/gal, °C ↔ °F, kg ↔ lb, L ↔ gal).
 import { convert, type UnitId, type UnitSystem, UNITS } from '../plating/units';
-import type { VerdictStatus } from './verdict';
+import type { LimitName, Limits, Verdict, VerdictStatus } from './verdict';
 
 const SYMBOL_TO_ID: Record<string, UnitId> = {
   'g/L': 'g/L',
@@ -55,4 +55,21 @@ export const VERDICT_STATUS: Record<VerdictStatus, 'ok' | 'near' | 'out'> = {
 export function roundForDisplay(value: number, significant = 4): number {
   if (!Number.isFinite(value) || value === 0) return value;
   return Number(value.toPrecision(significant));
+}
+
+const LIMIT_WORDS: Record<LimitName, { words: string; key: keyof Limits }> = {
+  lower_spec: { words: 'lower specification limit', key: 'lowerSpec' },
+  upper_spec: { words: 'upper specification limit', key: 'upperSpec' },
+  lower_control: { words: 'lower control limit', key: 'lowerControl' },
+  upper_control: { words: 'upper control limit', key: 'upperControl' },
+};
+
+/** "Below the lower control limit (48.3 g/L)." in the reader's units. */
+export function verdictSentence(verdict: Pick<Verdict, 'status' | 'limit'>, limits: Limits, unit: string, system: UnitSystem): string {
+  if (verdict.status === 'in_range' || !verdict.limit) return 'Within the limits.';
+  const { words, key } = LIMIT_WORDS[verdict.limit];
+  const bound = limits[key];
+  const shown = bound === undefined ? '' : ` (${roundForDisplay(toDisplay(bound, unit, system).value)} ${displayUnitOf(unit, system)})`;
+  if (verdict.status === 'near_limit') return `Close to the ${words}${shown}.`;
+  return `${verdict.limit.startsWith('lower') ? 'Below' : 'Above'} the ${words}${shown}.`;
 }

@@ -11,13 +11,18 @@ export const ENTRY_KEY = z
 // Entries made offline may reach the server hours later; the time is when the work was done.
 const MAX_AGE_MS = 31 * 24 * 3600 * 1000;
 const CLOCK_SKEW_MS = 10 * 60 * 1000;
-export const entryTime = z.iso.datetime({ offset: true, message: 'Give the time as an ISO date and time.' }).transform((s, ctx) => {
-  const d = new Date(s);
-  const now = Date.now();
-  if (d.getTime() > now + CLOCK_SKEW_MS) ctx.addIssue({ code: 'custom', message: 'The time is in the future: check the device clock.' });
-  if (d.getTime() < now - MAX_AGE_MS) ctx.addIssue({ code: 'custom', message: 'Entries older than 31 days go through the lab upload.' });
-  return d;
-});
+function timeSchema(maxAgeMs: number | null) {
+  return z.iso.datetime({ offset: true, message: 'Give the time as an ISO date and time.' }).transform((s, ctx) => {
+    const d = new Date(s);
+    const now = Date.now();
+    if (d.getTime() > now + CLOCK_SKEW_MS) ctx.addIssue({ code: 'custom', message: 'The time is in the future: check the device clock.' });
+    if (maxAgeMs !== null && d.getTime() < now - maxAgeMs) ctx.addIssue({ code: 'custom', message: 'Entries older than 31 days go through the lab upload.' });
+    return d;
+  });
+}
+export const entryTime = timeSchema(MAX_AGE_MS);
+/** A correction keeps the time of the sample it corrects, however old. */
+const pastTime = timeSchema(null);
 
 const finite = (label: string) => z.number({ message: `${label} must be a number.` });
 
@@ -40,9 +45,13 @@ export const analysisEntrySchema = z.object({
   inputs: analysisInputsSchema,
   /** The unit a direct reading was entered in when it differs from the method's (°F for °C). */
   entryUnit: z.string().max(20).optional(),
-  takenAt: entryTime,
+  takenAt: pastTime,
   note: z.string().trim().max(500).default(''),
   supersedesId: z.uuid().optional(),
+}).superRefine((v, ctx) => {
+  if (!v.supersedesId && v.takenAt.getTime() < Date.now() - MAX_AGE_MS) {
+    ctx.addIssue({ code: 'custom', path: ['takenAt'], message: 'Entries older than 31 days go through the lab upload.' });
+  }
 });
 
 export const ADDITION_ENTRY_UNITS = ['kg', 'L', 'lb', 'gal'] as const;

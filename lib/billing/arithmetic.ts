@@ -94,14 +94,6 @@ export const STATUS_WORDS: Record<InvoiceStatus, string> = {
   credited: 'Credited',
 };
 
-/** "1,234.56" or "1234.5" (dollars) → 123456 cents, exactly, without floating point. */
-export function parseMoneyToCents(text: string): number | null {
-  const clean = text.trim().replace(/^\$/, '').replace(/,/g, '');
-  const m = /^(\d{1,12})(?:\.(\d{1,2}))?$/.exec(clean);
-  if (!m) return null;
-  return Number(m[1]) * 100 + Number((m[2] ?? '').padEnd(2, '0'));
-}
-
 /** A tax rate for display: 725 → "7.25 %". */
 export function formatTaxRate(bp: number): string {
   return `${(bp / 100).toFixed(2).replace(/\.?0+$/, '')} %`;

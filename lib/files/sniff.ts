@@ -188,3 +188,9 @@ export function sizeLimit(allowed: readonly FileKind[], maxBytes?: number): numb
   const cap = allowed.includes('stl') ? MAX_STL_BYTES : MAX_FILE_BYTES;
   return Math.min(cap, maxBytes ?? cap);
 }
+
+/** "25 MB", "9.8 KB": sizes in binary units as people read them on upload screens. */
+export function formatBytes(bytes: number): string {
+  if (bytes < 1024 * 1024) return `${Math.round((bytes / 1024) * 10) / 10} KB`;
+  return `${Math.round((bytes / MIB) * 10) / 10} MB`;
+}

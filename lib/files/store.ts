@@ -7,7 +7,7 @@ import { type Kysely, sql } from 'kysely';
 import { db, type Database } from '@/db';
 import { AppError } from '@/lib/errors';
 import { StlError, StlParser, type StlAnalysis, type StlOptions } from '@/lib/plating';
-import { checkFileType, type FileKind, sizeLimit } from './sniff';
+import { checkFileType, type FileKind, formatBytes, sizeLimit } from './sniff';
 
 export type FileSource = Uint8Array | ReadableStream<Uint8Array>;
 
@@ -56,10 +56,6 @@ export function safeFileName(name: string): string {
   return (clean || 'upload').slice(-255);
 }
 
-function megabytes(bytes: number): string {
-  return `${Math.round((bytes / (1024 * 1024)) * 10) / 10} MB`;
-}
-
 type Collected = { chunks: Uint8Array[]; size: number; sha256: string; head: Uint8Array; stl: StlParser | null; stlError: StlError | null };
 
 async function collect(source: FileSource, name: string, limit: number, stlOptions: StlOptions | null): Promise<Collected> {
@@ -70,7 +66,7 @@ async function collect(source: FileSource, name: string, limit: number, stlOptio
   let stlError: StlError | null = null;
   const take = (chunk: Uint8Array) => {
     size += chunk.length;
-    if (size > limit) throw new AppError('TOO_LARGE', `"${name}" is larger than the ${megabytes(limit)} limit for this upload.`);
+    if (size > limit) throw new AppError('TOO_LARGE', `"${name}" is larger than the ${formatBytes(limit)} limit for this upload.`);
     hash.update(chunk);
     chunks.push(chunk);
     if (stl) {
@@ -118,6 +114,23 @@ function stlResult(c: Collected, name: string): StlAnalysis {
   } catch (e) {
     if (e instanceof StlError) throw new AppError('BAD_INPUT', `"${name}" is not a readable STL model: ${e.message}`);
     throw e;
+  }
+}
+
+/** Reads and checks an upload without keeping it (e.g. a CSV to import): its text, decoded as UTF-8. */
+export async function readUploadText(input: Omit<StoreFileInput, 'uploadedBy' | 'stl'>): Promise<{ name: string; text: string }> {
+  const name = safeFileName(input.name);
+  const source = input.bytes ?? input.stream;
+  if (!source) throw new AppError('BAD_INPUT', 'No file was sent.');
+  const collected = await collect(source, name, sizeLimit(input.allowed, input.maxBytes), null);
+  if (collected.size === 0) throw new AppError('BAD_INPUT', `"${name}" is empty.`);
+  const check = checkFileType({ head: collected.head, totalBytes: collected.size, name, declaredType: input.declaredType, allowed: input.allowed });
+  if (!check.ok) throw new AppError('BAD_INPUT', check.message);
+  try {
+    // `ignoreBOM: false` drops a leading byte-order mark, which spreadsheet programs often write.
+    return { name, text: new TextDecoder('utf-8', { fatal: true }).decode(Buffer.concat(collected.chunks, collected.size)) };
+  } catch {
+    throw new AppError('BAD_INPUT', `"${name}" is not UTF-8 text. Save it from the spreadsheet as "CSV UTF-8".`);
   }
 }
 

@@ -6,7 +6,7 @@ import type { SessionUser } from '@/lib/auth/current-user';
 import { type Permission, roleCan } from '@/lib/auth/roles';
 import { AppError } from '@/lib/errors';
 import { SUBSTRATES, type StlUnit } from '@/lib/plating';
-import { FILE_KINDS, type FileKind, sizeLimit } from './sniff';
+import { FILE_KINDS, type FileKind, formatBytes, sizeLimit } from './sniff';
 import { storeFile, type StoredFile } from './store';
 
 export type UploadPurpose = { allowed: readonly FileKind[]; permission: Permission; label: string };
@@ -54,7 +54,7 @@ export async function receiveUpload(req: Request, user: SessionUser): Promise<Up
   const limit = sizeLimit(purpose.allowed);
   // Refuse early when the client says the body is too big; the stream check catches the rest.
   const declaredLength = Number(req.headers.get('content-length') ?? 0);
-  if (declaredLength > limit) throw new AppError('TOO_LARGE', `"${name}" is larger than the ${Math.round(limit / 1048576)} MB limit for ${purpose.label}.`);
+  if (declaredLength > limit) throw new AppError('TOO_LARGE', `"${name}" is larger than the ${formatBytes(limit)} limit for ${purpose.label}.`);
   const stored = await storeFile({
     name,
     stream: req.body,

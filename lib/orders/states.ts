@@ -3,6 +3,7 @@
 import { type Kysely, type Transaction, sql } from 'kysely';
 import type { Database, WorkOrderState } from '@/db/types';
 import { AppError } from '@/lib/errors';
+import { bakedGuard, inspectedGuard } from '@/lib/quality/guards';
 
 export const WORK_ORDER_STATES: readonly WorkOrderState[] = [
   'accepted',
@@ -76,8 +77,20 @@ const guards: Partial<Record<WorkOrderState, StateGuard[]>> = {
       const r = await db.selectFrom('plating_runs').select(sql<number>`count(*)::int`.as('n')).where('work_order_id', '=', o.id).executeTakeFirstOrThrow();
       return r.n === 0 ? 'Log at least one plating run before marking the order plated.' : null;
     },
+    // Every received part must have gone through a logged load.
+    async (db, o) => {
+      const r = await db
+        .selectFrom('plating_runs')
+        .select(sql<number>`coalesce(sum(loads * parts_per_load), 0)::int`.as('parts'))
+        .where('work_order_id', '=', o.id)
+        .executeTakeFirstOrThrow();
+      return r.parts < o.quantity_received
+        ? `The runs logged so far cover ${r.parts} of the ${o.quantity_received} parts received. Log the remaining runs before marking the order plated.`
+        : null;
+    },
   ],
-  baked: [async (_db, o) => (o.bake_required ? null : 'This order does not require an embrittlement-relief bake.')],
+  baked: [async (_db, o) => (o.bake_required ? null : 'This order does not require an embrittlement-relief bake.'), bakedGuard],
+  inspected: [inspectedGuard],
   shipped: [
     async (_db, o, req) => {
       const q = req.quantityShipped;

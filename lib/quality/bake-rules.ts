@@ -1,4 +1,4 @@
-// The relief bake one lot needs: whether (the quoting rule), how long, how hot and how soon.
+// The relief bake one lot needs: whether (the work order says), how long, how hot and how soon.
 // Pure. The finish records the customer's specification, which governs; the ASTM B850 table is
 // shown beside it and used only where the finish is silent.
 import { bakeDecision } from '@/lib/quotes/bake-rule';
@@ -36,7 +36,9 @@ export function lotBakeRequirement(input: LotBakeInput): LotBakeRequirement {
     hardnessHrc: part.hardnessHrc,
     tensileMpa: part.tensileMpa,
   });
-  const required = input.orderBakeRequired || decision.applies;
+  // The work order is the one record of whether this lot bakes (the state machine follows it);
+  // when the part's data now says otherwise, the difference is pointed out, not acted on.
+  const required = input.orderBakeRequired;
   const windowHours = finish.bakeWindowHours ?? DEFAULT_WINDOW_H;
   const hasStrength = part.tensileMpa !== null || part.hardnessHrc !== null;
   const table = hasStrength
@@ -62,6 +64,7 @@ export function lotBakeRequirement(input: LotBakeInput): LotBakeRequirement {
     maxTempC = setPoint + SET_POINT_TOLERANCE_C;
     notes.push(`Set point ${setPoint} °C from the finish specification, held within ±${SET_POINT_TOLERANCE_C} °C.`);
   }
+  if (decision.applies && !required) notes.push(`${decision.reason} The work order does not call for a bake: check the order with a supervisor.`);
   const reason = required ? (decision.reason ?? 'The work order requires a relief bake.') : null;
   return { required, minHours: required ? minHours : null, minTempC, maxTempC, windowHours, notes, caution: BAKE_CAUTION, reason, tableHours, setPointC: setPoint };
 }

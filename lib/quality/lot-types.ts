@@ -132,3 +132,5 @@ export const DISPOSITION_LABELS: Record<Disposition, string> = {
   use_as_is: "Use as is (customer's approval)",
   scrap: 'Scrap',
 };
+
+export const DISPOSITIONS_LIST = Object.keys(DISPOSITION_LABELS) as [Disposition, ...Disposition[]];

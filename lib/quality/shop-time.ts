@@ -99,20 +99,18 @@ export function toLocalInputValue(at: Date | string | number, tz: string): strin
   return `${w.year}-${pad(w.month)}-${pad(w.day)}T${pad(w.hour)}:${pad(w.minute)}`;
 }
 
+/** The zone's short name at that instant as US English writes it ("EDT"), else "GMT+1"-style. */
+function zoneAbbreviation(d: Date, tz: string): string {
+  const part = new Intl.DateTimeFormat('en-US', { timeZone: tz, timeZoneName: 'short' }).formatToParts(d).find((p) => p.type === 'timeZoneName');
+  return part?.value ?? tz;
+}
+
 /** "8 Mar 2026, 14:30 EDT" in `tz`, the same text on server and browser. */
 export function formatShopTime(at: Date | string | number, tz: string): string {
   const d = new Date(at);
   if (Number.isNaN(d.getTime())) return '—';
-  return new Intl.DateTimeFormat('en-GB', {
-    timeZone: tz,
-    day: 'numeric',
-    month: 'short',
-    year: 'numeric',
-    hour: '2-digit',
-    minute: '2-digit',
-    hourCycle: 'h23',
-    timeZoneName: 'short',
-  }).format(d);
+  const w = wallOf(d.getTime(), tz);
+  return `${formatShopDate(d, tz)}, ${pad(w.hour)}:${pad(w.minute)} ${zoneAbbreviation(d, tz)}`;
 }
 
 /** "8 Mar 2026" in `tz`. */

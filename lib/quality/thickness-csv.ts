@@ -79,7 +79,8 @@ export function parseThicknessCsv(text: string, options: { defaultMethod?: Thick
     if (!valueText || !/^[+]?\d*\.?\d+(e[+-]?\d+)?$/i.test(valueText) || !Number.isFinite(value)) {
       rowProblems.push({ row: line, column: header[tCol.i]!, message: `"${cell(tCol.i)}" is not a number.` });
     }
-    const um = unit && rowProblems.length === 0 ? toStorage(value, unit) : NaN;
+    // Rounded to 0.1 nm: far below any instrument's resolution, and free of binary noise (10.413999…).
+    const um = unit && rowProblems.length === 0 ? Math.round(toStorage(value, unit) * 1e4) / 1e4 : NaN;
     if (rowProblems.length === 0 && !(um >= 0 && um < 5000)) {
       rowProblems.push({ row: line, column: header[tCol.i]!, message: `${cell(tCol.i)} is outside 0 to 5000 µm.` });
     }

@@ -9,6 +9,7 @@ type Series = NumberCountersTable['series'];
 const FORMAT: Partial<Record<Series, { prefix: string; digits: number }>> = {
   quote: { prefix: 'Q', digits: 4 },
   work_order: { prefix: 'W', digits: 5 },
+  certificate: { prefix: 'CC', digits: 5 },
 };
 
 export function formatDocumentNumber(series: Series, year: number, seq: number): string {

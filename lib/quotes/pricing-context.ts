@@ -1,5 +1,5 @@
 import 'server-only';
-import type { Kysely } from 'kysely';
+import { sql, type Kysely } from 'kysely';
 import { db as defaultDb } from '@/db';
 import type { Database, PricingBasis, RateSet } from '@/db/types';
 import { AppError } from '@/lib/errors';
@@ -31,20 +31,24 @@ export function ratesFromRow(r: RateSet): PricingRates {
 /** The rate set in force on a day: the latest one that took effect on or before it. */
 export async function rateSetInForce(conn: Db = defaultDb, on: Date = new Date()): Promise<RateSet> {
   const day = on.toISOString().slice(0, 10);
-  const row = await conn.selectFrom('rate_sets').selectAll().where('effective_from', '<=', day).orderBy('effective_from', 'desc').limit(1).executeTakeFirst();
+  const row = await conn.selectFrom('rate_sets').selectAll().where('effective_from', '<=', sql<Date>`${day}::date`).orderBy('effective_from', 'desc').limit(1).executeTakeFirst();
   if (!row) throw new AppError('CONFLICT', 'No rates are in force yet. The owner sets them under Rates.');
   return row;
 }
 
-export async function activeTankFacts(conn: Db = defaultDb): Promise<TankFacts[]> {
+export type ActiveTank = TankFacts & { name: string; hasAhMeter: boolean };
+
+export async function activeTankFacts(conn: Db = defaultDb): Promise<ActiveTank[]> {
   const rows = await conn
     .selectFrom('tanks')
-    .select(['id', 'code', 'line_id', 'template_id', 'element', 'ion_charge', 'efficiency', 'rectifier_max_a', 'anode_type', 'is_active'])
+    .select(['id', 'code', 'name', 'has_ah_meter', 'line_id', 'template_id', 'element', 'ion_charge', 'efficiency', 'rectifier_max_a', 'anode_type', 'is_active'])
     .where('is_active', '=', true)
     .execute();
   return rows.map((t) => ({
     id: t.id,
     code: t.code,
+    name: t.name,
+    hasAhMeter: t.has_ah_meter,
     lineId: t.line_id,
     templateId: t.template_id,
     element: t.element,

@@ -179,7 +179,7 @@ function estimateFor(input: PricingInput): JobEstimate {
   });
 }
 
-function component(key: CostKey, label: string, quantity: number, unit: string, rateCents: number): CostComponent {
+export function costComponent(key: CostKey, label: string, quantity: number, unit: string, rateCents: number): CostComponent {
   const exactCents = quantity * rateCents;
   return { key, label, quantity, unit, rateCents, exactCents, cents: roundCents(exactCents) };
 }
@@ -205,13 +205,13 @@ export function priceLine(input: PricingInput): LinePrice {
   const tankRate = finish.method === 'rack' ? rates.tankHourRackCents : rates.tankHourBarrelCents;
 
   const components: CostComponent[] = [
-    component('metal', 'Metal', metalKg, 'kg', metalRate),
-    component('additives', 'Salts and additives', n.ampHoursLot / 1000, 'kA·h', rates.additivesPerKahCents),
-    component('power', 'Power', n.energy.acKWh, 'kWh', rates.powerPerKwhCents),
-    component('labour', 'Labour (loads × handling minutes)', labourHours, 'h', rates.labourPerHourCents),
-    component('tankTime', `Tank time (${finish.method})`, tankHours, 'tank-h', tankRate),
-    component('masking', 'Masking', input.quantity, 'pc', finish.maskingPerPieceCents),
-    component('bake', 'Relief bake', bake.applies ? e.loads : 0, 'load', rates.bakePerLoadCents),
+    costComponent('metal', 'Metal', metalKg, 'kg', metalRate),
+    costComponent('additives', 'Salts and additives', n.ampHoursLot / 1000, 'kA·h', rates.additivesPerKahCents),
+    costComponent('power', 'Power', n.energy.acKWh, 'kWh', rates.powerPerKwhCents),
+    costComponent('labour', 'Labour (loads × handling minutes)', labourHours, 'h', rates.labourPerHourCents),
+    costComponent('tankTime', `Tank time (${finish.method})`, tankHours, 'tank-h', tankRate),
+    costComponent('masking', 'Masking', input.quantity, 'pc', finish.maskingPerPieceCents),
+    costComponent('bake', 'Relief bake', bake.applies ? e.loads : 0, 'load', rates.bakePerLoadCents),
   ];
 
   const subtotalCents = components.reduce((s, c) => s + c.cents, 0);

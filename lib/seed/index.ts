@@ -1,12 +1,18 @@
 import type { Kysely } from 'kysely';
 import type { Database } from '@/db/types';
+import { seedBath } from './bath';
+import { seedBilling } from './billing';
 import { seedCoreRecords } from './core-records';
 import { seedFoundation } from './foundation';
+import { seedQuotes } from './quotes';
 
 // The demo data set, shared by the demo start command and the tests.
 export async function seedDemo(db: Kysely<Database>): Promise<void> {
   await seedFoundation(db);
   await seedCoreRecords(db);
+  await seedBath(db);
+  await seedQuotes(db);
+  await seedBilling(db); // after the orders: bills shipped work orders
 }
 
 export { DEMO_PASSWORD, DEMO_USERS, DEMO_CUSTOMERS, DEMO_SHOP } from './foundation';

@@ -4,7 +4,7 @@ import { afterAll, describe, expect, it } from 'vitest';
 import { db } from '@/db';
 import { AppError } from '@/lib/errors';
 import { gridCsvStream, gridQueryFrom, gridResponse, runGridQuery, type GridColumns } from '@/lib/grid/server';
-import { inRolledBackTransaction } from '../rollback';
+import { inRolledBackTransaction } from '../records/helpers';
 
 afterAll(() => db.destroy());
 
@@ -85,7 +85,7 @@ describe('grid helper on a real table of 100,000 rows', () => {
       // made_on = 2026-01-01 + (i mod 365) days; 2026-01-03 ⇒ i mod 365 = 2: i = 2, 367, … ≤ 100000 → 274 rows.
       expect(onDay.total).toBe(274);
       const search = await runGridQuery(base(q), OPTS, query('q=C00012 part'));
-      // Codes C000120..C000129 and C00012 itself? No: codes are 6 digits, so C00012x: 10 rows, all named "Part …".
+      // Codes are "C" + 6 digits, so "C00012" is in C000120…C000129 only (10 rows); "part" is in every name.
       expect(search.total).toBe(10);
       expect(search.rows.every((r) => String(r.code).startsWith('C00012'))).toBe(true);
     });

@@ -1,0 +1,31 @@
+import type { Metadata } from 'next';
+import { LinkButton } from '@/components/ui/button';
+import { PageHeader } from '@/components/ui/page-header';
+import { can, requirePageUser } from '@/lib/auth/current-user';
+import { CustomerGrid } from './customer-grid';
+
+export const metadata: Metadata = { title: 'Customers' };
+
+export default async function CustomersPage() {
+  const user = await requirePageUser('customers.read', '/customers');
+  const mayWrite = can(user, 'customers.write');
+  return (
+    <div className="flex flex-col gap-4">
+      <PageHeader
+        title="Customers"
+        description="Companies the shop plates for, with their billing details and contacts."
+        actions={
+          mayWrite ? (
+            <>
+              <LinkButton href="/customers/import" variant="secondary">
+                Import from CSV
+              </LinkButton>
+              <LinkButton href="/customers/new">New customer</LinkButton>
+            </>
+          ) : null
+        }
+      />
+      <CustomerGrid />
+    </div>
+  );
+}

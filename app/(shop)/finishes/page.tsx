@@ -1,0 +1,75 @@
+import type { Metadata } from 'next';
+import Link from 'next/link';
+import { Badge } from '@/components/ui/badge';
+import { LinkButton } from '@/components/ui/button';
+import { Card } from '@/components/ui/card';
+import { cautionTexts } from '@/components/ui/caution';
+import { EmptyState } from '@/components/ui/empty-state';
+import { PageHeader } from '@/components/ui/page-header';
+import { Table, TBody, Td, Th, THead, Tr } from '@/components/ui/table';
+import { can, requirePageUser } from '@/lib/auth/current-user';
+import { finishHazards } from '@/lib/finishes/hazards';
+import { findFinishes } from '@/lib/finishes/queries';
+import { findMetal, formatStoredQuantity } from '@/lib/plating';
+
+export const metadata: Metadata = { title: 'Finishes' };
+
+export default async function FinishesPage() {
+  const user = await requirePageUser('quotes.read', '/finishes');
+  const finishes = await findFinishes();
+  return (
+    <div className="flex flex-col gap-4">
+      <PageHeader
+        title="Finishes"
+        description="What customers order and how the shop runs it: route, metal, thickness and the figures quotes are priced from."
+        actions={can(user, 'quotes.write') ? <LinkButton href="/finishes/new">New finish</LinkButton> : null}
+      />
+      <Card padding="none">
+        {finishes.length === 0 ? (
+          <EmptyState title="No finishes yet" />
+        ) : (
+          <Table caption="Finishes" captionHidden>
+            <THead>
+              <Tr>
+                <Th>Code</Th>
+                <Th>Name and specification</Th>
+                <Th>Metal</Th>
+                <Th numeric>Minimum</Th>
+                <Th>Method</Th>
+                <Th>Cautions</Th>
+              </Tr>
+            </THead>
+            <TBody>
+              {finishes.map((f) => (
+                <Tr key={f.id} className={f.is_active ? undefined : 'text-ink-muted'}>
+                  <Td>
+                    <Link href={`/finishes/${f.id}`}>{f.code}</Link>
+                    {f.is_active ? null : (
+                      <Badge tone="outline" className="ml-2">
+                        retired
+                      </Badge>
+                    )}
+                  </Td>
+                  <Td>
+                    {f.name}
+                    {f.spec_text ? <div className="text-xs text-ink-muted">{f.spec_text}</div> : null}
+                  </Td>
+                  <Td>{findMetal(f.element, f.ion_charge)?.ion ?? f.element}</Td>
+                  <Td numeric>{formatStoredQuantity(f.min_thickness_um, 'thickness', user.unitSystem)}</Td>
+                  <Td>{f.method}</Td>
+                  <Td>
+                    {finishHazards({ element: f.element, ionCharge: f.ion_charge, route: f.process_route, bakeRequired: f.bake_required }).map((k) => (
+                      <Badge key={k} tone="copper" className="mr-1">
+                        {cautionTexts[k].title}
+                      </Badge>
+                    ))}
+                  </Td>
+                </Tr>
+              ))}
+            </TBody>
+          </Table>
+        )}
+      </Card>
+    </div>
+  );
+}

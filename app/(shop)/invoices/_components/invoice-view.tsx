@@ -1,0 +1,140 @@
+// Pieces of an invoice shown to staff and, in the customer area, to the customer: the status
+// badge, the lines with totals, and the payment history. Server components only.
+import { formatMoney, Money } from '@/components/money';
+import { Badge } from '@/components/ui/badge';
+import { Table, TBody, Td, TFoot, Th, THead, Tr } from '@/components/ui/table';
+import { formatTaxRate, STATUS_WORDS } from '@/lib/billing/arithmetic';
+import type { InvoiceDetail, InvoiceSummary } from '@/lib/billing/queries';
+import { formatDateTime, formatDay, formatUnitPrice } from '@/lib/quotes/format';
+
+/** Links inside tables and headers, so they read as links. */
+export const LINK = 'font-medium text-action hover:underline';
+
+export function InvoiceStatusBadge({ summary }: { summary: Pick<InvoiceSummary, 'status' | 'isOverdue'> }) {
+  const tone = summary.status === 'paid' ? 'neutral' : summary.status === 'credited' ? 'outline' : 'action';
+  return (
+    <span className="inline-flex flex-wrap gap-1">
+      <Badge tone={tone}>{STATUS_WORDS[summary.status]}</Badge>
+      {summary.isOverdue ? <Badge tone="copper">Overdue</Badge> : null}
+    </span>
+  );
+}
+
+const qty = new Intl.NumberFormat('en-US', { maximumFractionDigits: 4 });
+
+export function InvoiceLines({ detail }: { detail: InvoiceDetail }) {
+  const { invoice, summary, lines } = detail;
+  return (
+    <Table caption="Lines" captionHidden>
+      <THead>
+        <tr>
+          <Th>#</Th>
+          <Th>Description</Th>
+          <Th numeric>Quantity</Th>
+          <Th>Unit</Th>
+          <Th numeric>Unit price</Th>
+          <Th numeric>Amount</Th>
+        </tr>
+      </THead>
+      <TBody>
+        {lines.map((l) => (
+          <Tr key={l.id}>
+            <Td>{l.line_no}</Td>
+            <Td>{l.description}</Td>
+            <Td numeric>{qty.format(Number(l.quantity))}</Td>
+            <Td>{l.unit}</Td>
+            <Td numeric>{formatUnitPrice(Number(l.unit_price_cents))}</Td>
+            <Td numeric>
+              <Money cents={l.amount_cents} />
+            </Td>
+          </Tr>
+        ))}
+      </TBody>
+      <TFoot>
+        <TotalRow label="Subtotal" cents={invoice.subtotal_cents} />
+        <TotalRow label={`Tax (${formatTaxRate(invoice.tax_rate_bp)})`} cents={invoice.tax_cents} />
+        <TotalRow label="Total" cents={invoice.total_cents} />
+        {summary.creditedCents > 0 ? <TotalRow label="Credited" cents={-summary.creditedCents} /> : null}
+        {summary.paidCents > 0 ? <TotalRow label="Paid" cents={-summary.paidCents} /> : null}
+        <TotalRow label={summary.openCents < 0 ? 'Credit balance' : 'Balance due'} cents={Math.abs(summary.openCents)} strong />
+      </TFoot>
+    </Table>
+  );
+}
+
+function TotalRow({ label, cents, strong }: { label: string; cents: number; strong?: boolean }) {
+  return (
+    <tr className={strong ? 'text-base' : 'font-normal'}>
+      <Td colSpan={5} numeric>
+        {label}
+      </Td>
+      <Td numeric>
+        <Money cents={cents} accounting />
+      </Td>
+    </tr>
+  );
+}
+
+const METHOD_WORDS = { card: 'Card', check: 'Check', bank_transfer: 'Bank transfer' } as const;
+
+export function PaymentHistory({ detail }: { detail: InvoiceDetail }) {
+  const rows = [
+    ...detail.payments.map((p) => ({
+      key: p.id,
+      at: p.received_at,
+      what: p.kind === 'refund' ? `Refund (${METHOD_WORDS[p.method].toLowerCase()})` : `Payment (${METHOD_WORDS[p.method].toLowerCase()})`,
+      note: p.reference,
+      cents: p.kind === 'refund' ? p.amount_cents : -p.amount_cents,
+    })),
+    ...detail.creditNotes.map((c) => ({ key: c.id, at: c.created_at, what: `Credit note ${c.number}`, note: c.reason, cents: -c.amount_cents })),
+    ...detail.declines.map((d) => ({ key: d.id, at: d.received_at, what: 'Card payment not completed', note: d.outcome.replace(/^declined: /, ''), cents: null })),
+  ].sort((a, b) => a.at.getTime() - b.at.getTime());
+  if (rows.length === 0) return <p className="text-sm text-ink-muted">No payments yet.</p>;
+  return (
+    <Table caption="Payment history" captionHidden dense>
+      <THead>
+        <tr>
+          <Th>When</Th>
+          <Th>What</Th>
+          <Th>Note</Th>
+          <Th numeric>Amount</Th>
+        </tr>
+      </THead>
+      <TBody>
+        {rows.map((r) => (
+          <Tr key={r.key}>
+            <Td className="whitespace-nowrap">{formatDateTime(r.at)}</Td>
+            <Td>{r.what}</Td>
+            <Td className="text-ink-muted">{r.note}</Td>
+            <Td numeric>{r.cents === null ? '—' : <Money cents={r.cents} accounting />}</Td>
+          </Tr>
+        ))}
+      </TBody>
+    </Table>
+  );
+}
+
+export function InvoiceFacts({ detail }: { detail: InvoiceDetail }) {
+  const { invoice, summary } = detail;
+  return (
+    <dl className="grid gap-x-6 gap-y-1 text-sm sm:grid-cols-[9rem_1fr]">
+      <dt className="text-ink-muted">Bill to</dt>
+      <dd>
+        {invoice.bill_to_name}
+        {invoice.bill_to_address ? <span className="block text-ink-muted">{invoice.bill_to_address}</span> : null}
+      </dd>
+      <dt className="text-ink-muted">Invoice date</dt>
+      <dd>{formatDay(summary.issuedOn)}</dd>
+      <dt className="text-ink-muted">Terms</dt>
+      <dd>{invoice.payment_terms_days === 0 ? 'Due on receipt' : `Net ${invoice.payment_terms_days} days`}</dd>
+      <dt className="text-ink-muted">Due date</dt>
+      <dd>{formatDay(summary.dueOn)}</dd>
+      <dt className="text-ink-muted">Balance due</dt>
+      <dd className="font-semibold">{formatMoney(Math.max(0, summary.openCents))}</dd>
+    </dl>
+  );
+}
+
+export function RoundingNote({ rule }: { rule: string }) {
+  return <p className="text-xs text-ink-muted">Rounding: {rule}</p>;
+}

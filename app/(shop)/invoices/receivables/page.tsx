@@ -1,0 +1,112 @@
+import type { Metadata } from 'next';
+import Link from 'next/link';
+import { Money } from '@/components/money';
+import { Card } from '@/components/ui/card';
+import { EmptyState } from '@/components/ui/empty-state';
+import { PageHeader } from '@/components/ui/page-header';
+import { Table, TBody, Td, TFoot, Th, THead, Tr } from '@/components/ui/table';
+import { can, requirePageUser } from '@/lib/auth/current-user';
+import { AGING_BUCKETS, type BucketTotals } from '@/lib/billing/aging';
+import { receivablesReport } from '@/lib/billing/queries';
+import { formatDay } from '@/lib/quotes/format';
+import { BillingTabs } from '../_components/billing-tabs';
+import { LINK } from '../_components/invoice-view';
+
+export const metadata: Metadata = { title: 'Receivables' };
+
+function BucketCells({ totals }: { totals: BucketTotals }) {
+  return (
+    <>
+      {AGING_BUCKETS.map((b) => (
+        <Td key={b.key} numeric className={totals[b.key] === 0 ? 'text-ink-faint' : undefined}>
+          <Money cents={totals[b.key]} />
+        </Td>
+      ))}
+    </>
+  );
+}
+
+export default async function ReceivablesPage() {
+  const user = await requirePageUser('invoices.read', '/invoices/receivables');
+  const report = await receivablesReport();
+  return (
+    <div className="flex flex-col gap-4">
+      <PageHeader
+        title="Receivables"
+        description={`What customers owe as of ${formatDay(report.asOf)}, by days past the due date. Paid and credited invoices are left out.`}
+      />
+      <BillingTabs canIssue={can(user, 'invoices.issue')} />
+      {report.invoices.length === 0 ? (
+        <EmptyState title="Nothing is owed" description="Every issued invoice is paid or credited." />
+      ) : (
+        <>
+          <Card title="By customer" padding="none">
+            <Table caption="Receivables by customer and age" captionHidden>
+              <THead>
+                <tr>
+                  <Th>Customer</Th>
+                  {AGING_BUCKETS.map((b) => (
+                    <Th key={b.key} numeric>
+                      {b.label}
+                    </Th>
+                  ))}
+                  <Th numeric>Total</Th>
+                </tr>
+              </THead>
+              <TBody>
+                {report.customers.map((c) => (
+                  <Tr key={c.customerId}>
+                    <Td>{c.customerName}</Td>
+                    <BucketCells totals={c.totals} />
+                    <Td numeric className="font-semibold">
+                      <Money cents={c.totalCents} />
+                    </Td>
+                  </Tr>
+                ))}
+              </TBody>
+              <TFoot>
+                <tr>
+                  <Td>All customers</Td>
+                  <BucketCells totals={report.totals} />
+                  <Td numeric>
+                    <Money cents={report.totalCents} />
+                  </Td>
+                </tr>
+              </TFoot>
+            </Table>
+          </Card>
+          <Card title="Open invoices" padding="none">
+            <Table caption="Open invoices, most overdue first" captionHidden dense>
+              <THead>
+                <tr>
+                  <Th>Invoice</Th>
+                  <Th>Customer</Th>
+                  <Th>Due</Th>
+                  <Th numeric>Days past due</Th>
+                  <Th>Age</Th>
+                  <Th numeric>Open</Th>
+                </tr>
+              </THead>
+              <TBody>
+                {report.invoices.map((i) => (
+                  <Tr key={i.invoiceId}>
+                    <Td>
+                      <Link href={`/invoices/${i.invoiceId}`} className={LINK}>{i.number}</Link>
+                    </Td>
+                    <Td>{i.customerName}</Td>
+                    <Td>{formatDay(i.dueOn)}</Td>
+                    <Td numeric>{i.daysPastDue > 0 ? i.daysPastDue : '—'}</Td>
+                    <Td>{AGING_BUCKETS.find((b) => b.key === i.bucket)?.label}</Td>
+                    <Td numeric>
+                      <Money cents={i.openCents} />
+                    </Td>
+                  </Tr>
+                ))}
+              </TBody>
+            </Table>
+          </Card>
+        </>
+      )}
+    </div>
+  );
+}

@@ -1,0 +1,129 @@
+import { Money } from '@/components/money';
+import { Table, TBody, TFoot, Td, Th, THead, Tr } from '@/components/ui/table';
+import { formatNumber, formatStoredQuantity, type UnitSystem } from '@/lib/plating';
+import { BASIS_LABELS } from '@/lib/quotes/basis';
+import { componentFigures } from '@/lib/quotes/display';
+import { formatUnitPrice } from '@/lib/quotes/format';
+import type { LinePrice } from '@/lib/quotes/pricing';
+
+/** The line's cost, cost by cost, then margin, charges and the price: what the estimator checks. */
+export function CostBuildUp({ price, units, caption }: { price: LinePrice; units: UnitSystem; caption: string }) {
+  const j = price.job;
+  return (
+    <div className="flex flex-col gap-3">
+      <Table dense caption={caption} captionHidden>
+        <THead>
+          <tr>
+            <Th>Cost</Th>
+            <Th numeric>Quantity</Th>
+            <Th numeric>Rate</Th>
+            <Th numeric>Amount</Th>
+          </tr>
+        </THead>
+        <TBody>
+          {price.components.map((c) => {
+            const f = componentFigures(c, units);
+            return (
+              <Tr key={c.key}>
+                <Td>{c.label}</Td>
+                <Td numeric>{f.quantity}</Td>
+                <Td numeric>{f.rate}</Td>
+                <Td numeric>
+                  <Money cents={c.cents} />
+                </Td>
+              </Tr>
+            );
+          })}
+          <Tr>
+            <Td className="font-medium">Subtotal (cost)</Td>
+            <Td />
+            <Td />
+            <Td numeric className="font-medium">
+              <Money cents={price.subtotalCents} />
+            </Td>
+          </Tr>
+          <Tr>
+            <Td>Margin</Td>
+            <Td />
+            <Td numeric>{price.marginPct} %</Td>
+            <Td numeric>
+              <Money cents={price.marginCents} />
+            </Td>
+          </Tr>
+          <Tr>
+            <Td>Lot charge</Td>
+            <Td />
+            <Td />
+            <Td numeric>
+              <Money cents={price.lotChargeCents} />
+            </Td>
+          </Tr>
+          <Tr>
+            <Td>Minimum charge</Td>
+            <Td />
+            <Td numeric>
+              <Money cents={price.minimumChargeCents} />
+            </Td>
+            <Td numeric>{price.minimumApplied ? <>raised to <Money cents={price.minimumChargeCents} /></> : 'not reached'}</Td>
+          </Tr>
+          <Tr>
+            <Td>Rush</Td>
+            <Td />
+            <Td numeric>× {price.rushMultiplierPct} %</Td>
+            <Td numeric>
+              <Money cents={price.rushCents} />
+            </Td>
+          </Tr>
+        </TBody>
+        <TFoot>
+          <tr>
+            <Td>Computed line total</Td>
+            <Td numeric>{formatUnitPrice(price.perPieceCents)} per piece</Td>
+            <Td numeric>
+              {formatUnitPrice(price.unitPriceCents)} {BASIS_LABELS[price.basis]}
+            </Td>
+            <Td numeric>
+              <Money cents={price.totalCents} />
+            </Td>
+          </tr>
+        </TFoot>
+      </Table>
+      <dl className="grid grid-cols-2 gap-x-4 gap-y-1 text-xs text-ink-muted sm:grid-cols-4">
+        <div>
+          <dt>Loads</dt>
+          <dd className="tabular text-ink">
+            {j.loads} × {j.partsPerLoad} pc{j.loadLimitedBy === 'rectifier' ? ' (rectifier-limited)' : ''}
+          </dd>
+        </div>
+        <div>
+          <dt>Average / minimum thickness</dt>
+          <dd className="tabular text-ink">
+            {formatStoredQuantity(j.averageThicknessUm, 'thickness', units)} / {formatStoredQuantity(j.minimumThicknessUm, 'thickness', units)}
+          </dd>
+        </div>
+        <div>
+          <dt>Charge</dt>
+          <dd className="tabular text-ink">{formatNumber(j.ampHours, 4)} A·h</dd>
+        </div>
+        <div>
+          <dt>Time per load / tank time</dt>
+          <dd className="tabular text-ink">
+            {formatNumber(j.minutesPerLoad, 3)} min / {formatNumber(j.tankHours, 3)} h
+          </dd>
+        </div>
+        <div>
+          <dt>Plated area</dt>
+          <dd className="tabular text-ink">{formatStoredQuantity(j.areaPerLotDm2, 'area', units)}</dd>
+        </div>
+        <div>
+          <dt>Distribution ratio</dt>
+          <dd className="tabular text-ink">{formatNumber(j.distributionRatio, 3)} (minimum ÷ average)</dd>
+        </div>
+        <div>
+          <dt>Bake</dt>
+          <dd className="text-ink">{price.bake.applies ? price.bake.reason : 'Not required'}</dd>
+        </div>
+      </dl>
+    </div>
+  );
+}

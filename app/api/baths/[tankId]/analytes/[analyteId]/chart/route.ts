@@ -1,0 +1,25 @@
+// GET /api/baths/<tankId>/analytes/<analyteId>/chart?from&to[&format=csv] — staff who may read
+// bath records (bath.read): the analyte's individuals chart data, in the reader's units.
+import { NextResponse } from 'next/server';
+import { chartCsv, getChartData, parseChartRange } from '@/lib/bath/chart';
+import { AppError } from '@/lib/errors';
+import { withPermission } from '@/lib/http';
+
+export const dynamic = 'force-dynamic';
+
+const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
+
+export const GET = withPermission<{ tankId: string; analyteId: string }>('bath.read', async (req, user, ctx) => {
+  const { tankId, analyteId } = await ctx.params;
+  if (!UUID.test(tankId) || !UUID.test(analyteId)) throw new AppError('NOT_FOUND', 'That analyte does not belong to this tank.');
+  const params = new URL(req.url).searchParams;
+  const range = parseChartRange(params.get('from'), params.get('to'));
+  const data = await getChartData(tankId, analyteId, range, user.unitSystem);
+  if (params.get('format') === 'csv') {
+    const name = `${data.analyte.tankCode}-${data.analyte.key}-${range.from.toISOString().slice(0, 10)}.csv`;
+    return new Response(chartCsv(data), {
+      headers: { 'content-type': 'text/csv; charset=utf-8', 'content-disposition': `attachment; filename="${name}"`, 'cache-control': 'no-store' },
+    });
+  }
+  return NextResponse.json(data, { headers: { 'cache-control': 'no-store' } });
+});

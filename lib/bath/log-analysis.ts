@@ -1,0 +1,182 @@
+import 'server-only';
+import type { Kysely } from 'kysely';
+import { db as defaultDb } from '@/db';
+import type { Analysis, AnalysisSource, Database } from '@/db/types';
+import { AppError } from '@/lib/errors';
+import { assertBathPermission, type BathActor } from './access';
+import { raiseAlert } from './alerts';
+import { getAnalyteWithTank, limitsOf, supplyOf, type AnalyteWithTank } from './analytes';
+import { badInput } from './checks';
+import { evaluateReading, evaluateValue } from './evaluate';
+import { readRecommendation, type Recommendation } from './recommend';
+import { describeRules, isRuleId, RULE_WINDOW, rulesAtLast } from './run-rules';
+import type { RuleId } from './spc';
+import type { AnalysisInputs } from './titration';
+import type { Verdict } from './verdict';
+
+// Logging one analysis: validate, compute, judge against the limits and the run rules on the last
+// 30 points, store, and raise alerts — in one transaction. An entry sent twice (same key) is
+// stored once; the resend gets the original back. A correction is a new analysis that names the
+// one it supersedes; both stay.
+
+export type LogAnalysisInput = {
+  key: string;
+  tankId: string;
+  analyteId: string;
+  inputs: AnalysisInputs;
+  entryUnit?: string;
+  /** A value reported by an outside laboratory, already in the analyte's unit: no method is run. */
+  reportedValue?: number;
+  takenAt: Date;
+  note?: string;
+  supersedesId?: string | null;
+  source: AnalysisSource;
+};
+
+export type LoggedAnalysis = {
+  analysis: Analysis;
+  verdict: Verdict['status'];
+  message: string;
+  rules: RuleId[];
+  recommendation: Recommendation | null;
+  /** Alerts this entry raised for the first time (repeats count on an open alert instead). */
+  newAlertIds: string[];
+  duplicate: boolean;
+};
+
+type Db = Kysely<Database>;
+
+/** The method recorded for results reported by an outside laboratory. */
+export const OUTSIDE_LAB_METHOD = 'outside-lab';
+
+/** Values of the analyte's current (not superseded) analyses up to `until`, oldest first. */
+export async function recentValues(trx: Db, analyteId: string, until: Date, limit: number, excludeId?: string | null): Promise<number[]> {
+  let q = trx
+    .selectFrom('analyses as a')
+    .select(['a.value'])
+    .where('a.analyte_id', '=', analyteId)
+    .where('a.taken_at', '<=', until)
+    .where(({ not, exists, selectFrom }) => not(exists(selectFrom('analyses as s').select('s.id').whereRef('s.supersedes_id', '=', 'a.id'))));
+  if (excludeId) q = q.where('a.id', '<>', excludeId);
+  const rows = await q.orderBy('a.taken_at', 'desc').limit(limit).execute();
+  return rows.map((r) => r.value).reverse();
+}
+
+async function checkSupersedes(trx: Db, analyte: AnalyteWithTank, supersedesId: string): Promise<void> {
+  const old = await trx.selectFrom('analyses').select(['id', 'analyte_id']).where('id', '=', supersedesId).executeTakeFirst();
+  if (!old || old.analyte_id !== analyte.id) throw new AppError('NOT_FOUND', 'The analysis to correct does not exist for this analyte.');
+  const later = await trx.selectFrom('analyses').select('id').where('supersedes_id', '=', supersedesId).executeTakeFirst();
+  if (later) throw new AppError('CONFLICT', 'That analysis has already been corrected: correct the newest entry instead.');
+}
+
+function fromStored(row: Analysis, duplicate: boolean): LoggedAnalysis {
+  return {
+    analysis: row,
+    verdict: row.verdict,
+    message: '',
+    rules: row.rules.filter(isRuleId),
+    recommendation: readRecommendation(row.recommendation),
+    newAlertIds: [],
+    duplicate,
+  };
+}
+
+export async function logAnalysis(actor: BathActor, input: LogAnalysisInput, executor: Db = defaultDb): Promise<LoggedAnalysis> {
+  assertBathPermission(actor, 'bath.log');
+  const existing = await executor.selectFrom('analyses').selectAll().where('idempotency_key', '=', input.key).executeTakeFirst();
+  if (existing) return fromStored(existing, true);
+
+  const analyte = await getAnalyteWithTank(input.tankId, input.analyteId, executor);
+  if (!analyte) throw new AppError('NOT_FOUND', 'That analyte does not belong to this tank.');
+  if (!analyte.is_active) throw new AppError('CONFLICT', `${analyte.name} is no longer analysed on this tank.`);
+  const subject = {
+    key: analyte.key,
+    name: analyte.name,
+    unit: analyte.unit,
+    methodId: analyte.method_id,
+    limits: { ...limitsOf(analyte), target: analyte.target },
+    supply: supplyOf(analyte),
+  };
+  const evaluation =
+    input.reportedValue !== undefined
+      ? evaluateValue(subject, analyte.volume_l, input.reportedValue)
+      : evaluateReading(subject, analyte.volume_l, input.inputs, input.entryUnit);
+  if (!evaluation.ok) throw badInput(evaluation.field, evaluation.message);
+  const { value, verdict, recommendation } = evaluation;
+
+  // Inside a caller's transaction (a lab upload: all rows or none) run in it; otherwise open one.
+  const inTransaction = <T>(work: (trx: Db) => Promise<T>): Promise<T> =>
+    executor.isTransaction ? work(executor) : executor.transaction().execute(work);
+  try {
+    return await inTransaction(async (trx) => {
+      if (input.supersedesId) await checkSupersedes(trx, analyte, input.supersedesId);
+      const previous = await recentValues(trx, analyte.id, input.takenAt, RULE_WINDOW - 1, input.supersedesId);
+      const rules = rulesAtLast([...previous, value]);
+      const row = await trx
+        .insertInto('analyses')
+        .values({
+          tank_id: analyte.tank_id,
+          analyte_id: analyte.id,
+          method_id: input.reportedValue !== undefined ? OUTSIDE_LAB_METHOD : analyte.method_id,
+          inputs: JSON.stringify({ ...input.inputs, ...(input.entryUnit ? { entryUnit: input.entryUnit } : {}) }),
+          value,
+          unit: analyte.unit,
+          verdict: verdict.status,
+          severity: verdict.severity,
+          rules,
+          recommendation: recommendation.kind === 'none' ? null : JSON.stringify(recommendation),
+          source: input.source,
+          taken_at: input.takenAt,
+          logged_by: actor.id,
+          idempotency_key: input.key,
+          supersedes_id: input.supersedesId ?? null,
+          note: input.note ?? '',
+        })
+        .onConflict((oc) => oc.column('idempotency_key').doNothing())
+        .returningAll()
+        .executeTakeFirst();
+      if (!row) {
+        // The same entry arrived twice at once: the other request stored it.
+        const original = await trx.selectFrom('analyses').selectAll().where('idempotency_key', '=', input.key).executeTakeFirstOrThrow();
+        return fromStored(original, true);
+      }
+      const newAlertIds: string[] = [];
+      const where = `${analyte.tank_code} ${analyte.tank_name}, ${analyte.name}`;
+      if (verdict.status === 'out_of_range') {
+        const a = await raiseAlert(trx, {
+          tankId: analyte.tank_id,
+          analyteId: analyte.id,
+          analysisId: row.id,
+          kind: 'out_of_limits',
+          dedupeKey: `out_of_limits:${analyte.id}`,
+          message: `${where}: ${value.toPrecision(4)} ${analyte.unit}. ${verdict.message}`,
+          detail: { value, unit: analyte.unit, limit: verdict.limit, outOfSpec: verdict.outOfSpec },
+        });
+        if (a.isNew) newAlertIds.push(a.id);
+      }
+      if (rules.length > 0) {
+        const a = await raiseAlert(trx, {
+          tankId: analyte.tank_id,
+          analyteId: analyte.id,
+          analysisId: row.id,
+          kind: 'run_rule',
+          dedupeKey: `run_rule:${analyte.id}`,
+          message: `${where}: ${describeRules(rules)} (last ${RULE_WINDOW} analyses).`,
+          detail: { value, rules },
+        });
+        if (a.isNew) newAlertIds.push(a.id);
+      }
+      return { analysis: row, verdict: verdict.status, message: verdict.message, rules, recommendation, newAlertIds, duplicate: false };
+    });
+  } catch (e) {
+    if (isUniqueViolation(e, 'analyses_supersedes_id_key')) {
+      throw new AppError('CONFLICT', 'That analysis has just been corrected by someone else: reload and correct the newest entry.');
+    }
+    throw e;
+  }
+}
+
+export function isUniqueViolation(e: unknown, constraint: string): boolean {
+  const err = e as { code?: string; constraint?: string };
+  return err?.code === '23505' && err.constraint === constraint;
+}

@@ -1,0 +1,65 @@
+// Receivables aging: open invoices sorted into buckets by days past due, with totals per bucket
+// and per customer. Pure.
+import { daysBetweenIso } from './dates';
+
+export type AgingBucket = 'current' | 'days_1_30' | 'days_31_60' | 'days_61_90' | 'over_90';
+
+export const AGING_BUCKETS: readonly { key: AgingBucket; label: string }[] = [
+  { key: 'current', label: 'Current' },
+  { key: 'days_1_30', label: '1–30 days' },
+  { key: 'days_31_60', label: '31–60 days' },
+  { key: 'days_61_90', label: '61–90 days' },
+  { key: 'over_90', label: 'Over 90 days' },
+];
+
+/** Not yet due, or due today, is current; the first day after the due date is 1 day past due. */
+export function agingBucket(daysPastDue: number): AgingBucket {
+  if (!Number.isInteger(daysPastDue)) throw new RangeError(`Days past due must be a whole number; got ${String(daysPastDue)}.`);
+  if (daysPastDue <= 0) return 'current';
+  if (daysPastDue <= 30) return 'days_1_30';
+  if (daysPastDue <= 60) return 'days_31_60';
+  if (daysPastDue <= 90) return 'days_61_90';
+  return 'over_90';
+}
+
+export type AgingInput = {
+  invoiceId: string;
+  number: string;
+  customerId: string;
+  customerName: string;
+  dueOn: string;
+  openCents: number;
+};
+
+export type AgedInvoice = AgingInput & { daysPastDue: number; bucket: AgingBucket };
+export type BucketTotals = Record<AgingBucket, number>;
+export type CustomerAging = { customerId: string; customerName: string; totals: BucketTotals; totalCents: number };
+export type AgingReport = { asOf: string; invoices: AgedInvoice[]; totals: BucketTotals; totalCents: number; customers: CustomerAging[] };
+
+const emptyTotals = (): BucketTotals => ({ current: 0, days_1_30: 0, days_31_60: 0, days_61_90: 0, over_90: 0 });
+
+/** Invoices with nothing open (paid, credited, overpaid) are left out. */
+export function ageReceivables(invoices: readonly AgingInput[], asOf: string): AgingReport {
+  const aged: AgedInvoice[] = invoices
+    .filter((i) => i.openCents > 0)
+    .map((i) => {
+      const daysPastDue = daysBetweenIso(i.dueOn, asOf);
+      return { ...i, daysPastDue, bucket: agingBucket(daysPastDue) };
+    })
+    .sort((a, b) => b.daysPastDue - a.daysPastDue || a.number.localeCompare(b.number));
+  const totals = emptyTotals();
+  const byCustomer = new Map<string, CustomerAging>();
+  for (const i of aged) {
+    totals[i.bucket] += i.openCents;
+    let c = byCustomer.get(i.customerId);
+    if (!c) {
+      c = { customerId: i.customerId, customerName: i.customerName, totals: emptyTotals(), totalCents: 0 };
+      byCustomer.set(i.customerId, c);
+    }
+    c.totals[i.bucket] += i.openCents;
+    c.totalCents += i.openCents;
+  }
+  const customers = [...byCustomer.values()].sort((a, b) => b.totalCents - a.totalCents || a.customerName.localeCompare(b.customerName));
+  const totalCents = aged.reduce((s, i) => s + i.openCents, 0);
+  return { asOf, invoices: aged, totals, totalCents, customers };
+}

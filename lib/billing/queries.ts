@@ -1,0 +1,131 @@
+import 'server-only';
+import { sql, type Kysely } from 'kysely';
+import { db as defaultDb } from '@/db';
+import type { Database, InvoiceStatus } from '@/db/types';
+import { openBalanceCents } from './arithmetic';
+import { ageReceivables, type AgingReport } from './aging';
+import { isoDate, todayIso } from './dates';
+import { isUuid } from './orders';
+
+// Reading invoices. Staff read any invoice; the customer area passes its own customer id as the
+// scope, which goes into the WHERE clause, so another customer's invoice is simply not found.
+
+export type InvoiceScope = { customerId: string } | 'staff';
+
+export type InvoiceSummary = {
+  id: string;
+  number: string;
+  customerId: string;
+  customerName: string;
+  status: InvoiceStatus;
+  issuedOn: string;
+  dueOn: string;
+  totalCents: number;
+  paidCents: number;
+  creditedCents: number;
+  openCents: number;
+  isOverdue: boolean;
+  currency: string;
+};
+
+function summaryQuery(database: Kysely<Database>) {
+  return database
+    .selectFrom('invoices as i')
+    .innerJoin('customers as c', 'c.id', 'i.customer_id')
+    .select([
+      'i.id', 'i.number', 'i.customer_id', 'c.name as customer_name', 'i.status', 'i.issued_on', 'i.due_on',
+      'i.total_cents', 'i.paid_cents', 'i.credited_cents', 'i.currency',
+    ]);
+}
+
+type SummaryRow = Awaited<ReturnType<ReturnType<typeof summaryQuery>['execute']>>[number];
+
+function toSummary(r: SummaryRow, today: string): InvoiceSummary {
+  const openCents = openBalanceCents({ totalCents: r.total_cents, paidCents: r.paid_cents, creditedCents: r.credited_cents });
+  const dueOn = isoDate(r.due_on);
+  return {
+    id: r.id,
+    number: r.number,
+    customerId: r.customer_id,
+    customerName: r.customer_name,
+    status: r.status,
+    issuedOn: isoDate(r.issued_on),
+    dueOn,
+    totalCents: r.total_cents,
+    paidCents: r.paid_cents,
+    creditedCents: r.credited_cents,
+    openCents,
+    isOverdue: openCents > 0 && dueOn < today,
+    currency: r.currency,
+  };
+}
+
+export type InvoiceFilter = { status?: InvoiceStatus | 'open' | 'overdue'; customerId?: string };
+
+export async function findInvoices(scope: InvoiceScope, filter: InvoiceFilter = {}, database: Kysely<Database> = defaultDb): Promise<InvoiceSummary[]> {
+  let q = summaryQuery(database).orderBy('i.issued_on', 'desc').orderBy('i.number', 'desc').limit(500);
+  const customerId = scope === 'staff' ? filter.customerId : scope.customerId;
+  if (customerId !== undefined) {
+    if (!isUuid(customerId)) return [];
+    q = q.where('i.customer_id', '=', customerId);
+  }
+  if (filter.status === 'open' || filter.status === 'overdue') q = q.where('i.status', 'in', ['issued', 'partly_paid']);
+  else if (filter.status) q = q.where('i.status', '=', filter.status);
+  if (filter.status === 'overdue') q = q.where('i.due_on', '<', sql<Date>`current_date`);
+  const today = todayIso();
+  return (await q.execute()).map((r) => toSummary(r, today));
+}
+
+export async function getInvoiceDetail(scope: InvoiceScope, invoiceId: string, database: Kysely<Database> = defaultDb) {
+  if (!isUuid(invoiceId)) return null;
+  if (scope !== 'staff' && !isUuid(scope.customerId)) return null;
+  let q = database.selectFrom('invoices as i').selectAll('i').where('i.id', '=', invoiceId);
+  if (scope !== 'staff') q = q.where('i.customer_id', '=', scope.customerId);
+  const invoice = await q.executeTakeFirst();
+  if (!invoice) return null;
+  const [lines, creditNotes, payments, declines, customer] = await Promise.all([
+    database.selectFrom('invoice_lines').selectAll().where('invoice_id', '=', invoice.id).orderBy('line_no').execute(),
+    database.selectFrom('credit_notes').selectAll().where('invoice_id', '=', invoice.id).orderBy('created_at').execute(),
+    database.selectFrom('payments').selectAll().where('invoice_id', '=', invoice.id).orderBy('received_at').orderBy('created_at').execute(),
+    database
+      .selectFrom('stripe_events')
+      .select(['id', 'outcome', 'received_at'])
+      .where('invoice_id', '=', invoice.id)
+      .where('outcome', 'like', 'declined:%')
+      .orderBy('received_at', 'desc')
+      .limit(5)
+      .execute(),
+    database.selectFrom('customers').select(['id', 'name', 'code']).where('id', '=', invoice.customer_id).executeTakeFirstOrThrow(),
+  ]);
+  const today = todayIso();
+  const summary = toSummary({ ...invoice, customer_name: customer.name }, today);
+  return { invoice, summary, customer, lines, creditNotes, payments, declines };
+}
+
+export type InvoiceDetail = NonNullable<Awaited<ReturnType<typeof getInvoiceDetail>>>;
+
+export async function findReminders(invoiceId: string, database: Kysely<Database> = defaultDb) {
+  return database.selectFrom('invoice_reminders').selectAll().where('invoice_id', '=', invoiceId).orderBy('sent_at').execute();
+}
+
+export async function receivablesReport(asOf: string = todayIso(), database: Kysely<Database> = defaultDb): Promise<AgingReport> {
+  const rows = await summaryQuery(database).where('i.status', 'in', ['issued', 'partly_paid']).execute();
+  return ageReceivables(
+    rows.map((r) => toSummary(r, asOf)).map((s) => ({
+      invoiceId: s.id,
+      number: s.number,
+      customerId: s.customerId,
+      customerName: s.customerName,
+      dueOn: s.dueOn,
+      openCents: s.openCents,
+    })),
+    asOf,
+  );
+}
+
+/** The shop's own name and address, printed on invoices (settings key 'shop'). */
+export async function shopDetails(database: Kysely<Database> = defaultDb): Promise<{ name: string; address: string; phone: string; email: string }> {
+  const row = await database.selectFrom('settings').select('value').where('key', '=', 'shop').executeTakeFirst();
+  const v = (row?.value ?? {}) as Partial<Record<'name' | 'address' | 'phone' | 'email', string>>;
+  return { name: v.name ?? 'Ampwright', address: v.address ?? '', phone: v.phone ?? '', email: v.email ?? '' };
+}

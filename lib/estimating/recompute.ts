@@ -1,0 +1,64 @@
+// The workbench's recompute: the form as typed → field errors, part geometry and the whole
+// calculation. The page calls it on every keystroke (in the browser) and the benchmark times it.
+// Pure and synchronous.
+import { PlatingInputError, type UnitSystem } from '@/lib/plating';
+import type { CalculationInput } from './calculation-schema';
+import { computeCalculation, fieldErrorsOf, measureGeometry, type CalculationResult, type GeometryFigures } from './calculation';
+import { readForm, type FieldErrors } from './form-read';
+import type { WorkbenchForm } from './form-state';
+
+// Engine field → the form's field, so each message sits beside the box that caused it.
+const FORM_FIELDS: Readonly<Record<string, string>> = {
+  quantity: 'quantity',
+  minimumThicknessUm: 'minimumThickness',
+  depositMassG: 'minimumThickness',
+  currentDensityAdm2: 'currentDensity',
+  efficiency: 'efficiencyPct',
+  distributionRatio: 'distributionRatio',
+  partsPerLoad: 'partsPerLoad',
+  rectifierMaxA: 'rectifierMaxA',
+  tankVolts: 'tankVolts',
+  ampHours: 'quantity',
+  rectifierEfficiency: 'rectifierEfficiencyPct',
+  dragOutLPerM2: 'dragOut',
+  bathMetalGPerL: 'bathMetal',
+  anodeLossPercent: 'anodeLossPct',
+  formula: 'replenishmentSalt',
+  element: 'metalKey',
+  charge: 'metalKey',
+  hardnessHrc: 'hardnessHrc',
+  tensileMpa: 'tensileMpa',
+};
+
+export type WorkbenchView = {
+  input: CalculationInput | null;
+  result: CalculationResult | null;
+  geometry: GeometryFigures | null; // shown even while the process fields have errors
+  fieldErrors: FieldErrors;
+};
+
+function engineErrors(e: unknown, form: WorkbenchForm): FieldErrors {
+  if (!(e instanceof PlatingInputError)) throw e;
+  // Area problems belong to the area box, or to the geometry as a whole for shapes and STL files.
+  const geometryKey = form.geometryMode === 'area' ? 'area' : 'geometry';
+  return fieldErrorsOf(e, { ...FORM_FIELDS, areaPerPartDm2: geometryKey, areaDm2: geometryKey, volumeCm3: geometryKey }, '_form');
+}
+
+export function recomputeWorkbench(form: WorkbenchForm, system: UnitSystem): WorkbenchView {
+  const reading = readForm(form, system);
+  let geometry: GeometryFigures | null = null;
+  let fieldErrors = reading.fieldErrors;
+  if (reading.geometry) {
+    try {
+      geometry = measureGeometry(reading.geometry, form.substrate);
+    } catch (e) {
+      fieldErrors = { ...fieldErrors, ...engineErrors(e, form) };
+    }
+  }
+  if (!reading.input || !geometry) return { input: null, result: null, geometry, fieldErrors };
+  try {
+    return { input: reading.input, result: computeCalculation(reading.input), geometry, fieldErrors };
+  } catch (e) {
+    return { input: null, result: null, geometry, fieldErrors: { ...fieldErrors, ...engineErrors(e, form) } };
+  }
+}

@@ -1,0 +1,76 @@
+// The finish form's starting values, shown in the user's units. Pure.
+import { centsToDollarText } from '@/lib/records/fields';
+import { DISTRIBUTION_RATIO_DEFAULTS, displayUnit, fromStorage, type UnitSystem } from '@/lib/plating';
+import { routeToText, type RouteStep } from './hazards';
+
+type Saved = {
+  id: string;
+  code: string;
+  name: string;
+  spec_text: string;
+  process_route: RouteStep[];
+  element: string;
+  ion_charge: number;
+  min_thickness_um: number;
+  max_thickness_um: number | null;
+  method: 'rack' | 'barrel';
+  current_density_adm2: number;
+  efficiency: number;
+  distribution_ratio: number;
+  tank_volts: number;
+  parts_per_load: number;
+  handling_minutes_per_load: number;
+  masking_per_piece_cents: number;
+  bake_required: boolean;
+  bake_threshold_hrc: number | null;
+  bake_window_hours: number;
+  bake_temp_c: number | null;
+  bake_hours: number | null;
+  line_id: string | null;
+  is_active: boolean;
+};
+
+// Four significant figures without trailing zeros: 8 → "8", 0.7 → "0.7", 0.03937 mil stays.
+const num = (n: number | null) => (n === null ? '' : String(Number(n.toPrecision(4))));
+
+export function finishFormDefaults(f: Saved | null, system: UnitSystem): Record<string, string> {
+  const thicknessUnit = displayUnit('thickness', system);
+  const cdUnit = displayUnit('currentDensity', system);
+  const tempUnit = displayUnit('temperature', system);
+  if (!f) {
+    return {
+      finishId: '', code: '', name: '', specText: '', route: '', metal: 'Zn2+', minThickness: '', maxThickness: '', thicknessUnit,
+      method: 'rack', currentDensity: '', currentDensityUnit: cdUnit, efficiencyPercent: '', distributionRatio: String(DISTRIBUTION_RATIO_DEFAULTS.rack),
+      tankVolts: '6', partsPerLoad: '', handlingMinutesPerLoad: '10', maskingPerPiece: '0.00', bakeRequired: '', bakeThresholdHrc: '31',
+      bakeWindowHours: '4', bakeTemp: '', temperatureUnit: tempUnit, bakeHours: '', lineId: '', isActive: 'on',
+    };
+  }
+  return {
+    finishId: f.id,
+    code: f.code,
+    name: f.name,
+    specText: f.spec_text,
+    route: routeToText(f.process_route),
+    metal: `${f.element}${f.ion_charge}+`,
+    minThickness: num(fromStorage(f.min_thickness_um, thicknessUnit)),
+    maxThickness: f.max_thickness_um === null ? '' : num(fromStorage(f.max_thickness_um, thicknessUnit)),
+    thicknessUnit,
+    method: f.method,
+    currentDensity: num(fromStorage(f.current_density_adm2, cdUnit)),
+    currentDensityUnit: cdUnit,
+    efficiencyPercent: num(f.efficiency * 100),
+    distributionRatio: num(f.distribution_ratio),
+    tankVolts: num(f.tank_volts),
+    partsPerLoad: String(f.parts_per_load),
+    handlingMinutesPerLoad: num(f.handling_minutes_per_load),
+    maskingPerPiece: centsToDollarText(f.masking_per_piece_cents),
+    bakeRequired: f.bake_required ? 'on' : '',
+    bakeThresholdHrc: num(f.bake_threshold_hrc),
+    bakeWindowHours: num(f.bake_window_hours),
+    bakeTemp: f.bake_temp_c === null ? '' : num(fromStorage(f.bake_temp_c, tempUnit)),
+    temperatureUnit: tempUnit,
+    bakeHours: num(f.bake_hours),
+    lineId: f.line_id ?? '',
+    isActive: f.is_active ? 'on' : '',
+  };
+}

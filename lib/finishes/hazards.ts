@@ -1,0 +1,45 @@
+// Which safety cautions a finish needs, from its metal and its process route. Pure.
+// Cyanide metals and hexavalent chromium are flagged by the engine's metal list (lib/plating/metals.ts);
+// the route is read for the words a shop writes for those steps.
+import { findMetal } from '@/lib/plating';
+import type { CautionKind } from '@/components/ui/caution';
+
+export type RouteStep = { step: string; note?: string };
+
+const CYANIDE = /cyanide/i;
+const HEXAVALENT = /hexavalent|chromic acid|dichromate|\bcr\s*\(?vi\)?\b|yellow chromate|chromate conversion/i;
+// "free of hexavalent chromium", "trivalent", "non-hexavalent" describe the safer process.
+const NOT_HEXAVALENT = /\bfree\b|\bnon-?hex|trivalent|without|cr\s*\(?iii\)?/i;
+
+export function finishHazards(finish: { element: string; ionCharge: number; route: readonly RouteStep[]; bakeRequired: boolean }): CautionKind[] {
+  const kinds = new Set<CautionKind>();
+  const metal = findMetal(finish.element, finish.ionCharge);
+  if (metal?.caution && CYANIDE.test(metal.caution)) kinds.add('cyanide');
+  if (metal?.element === 'Cr' && metal.charge === 6) kinds.add('hexavalent-chromium');
+  for (const s of finish.route) {
+    const text = `${s.step} ${s.note ?? ''}`;
+    if (CYANIDE.test(text)) kinds.add('cyanide');
+    if (HEXAVALENT.test(text) && !NOT_HEXAVALENT.test(text)) kinds.add('hexavalent-chromium');
+  }
+  if (finish.bakeRequired) kinds.add('high-strength-steel-bake');
+  return [...kinds];
+}
+
+/** The route as the form's text: one step a line, a note after "|". */
+export function routeToText(route: readonly RouteStep[]): string {
+  return route.map((s) => (s.note ? `${s.step} | ${s.note}` : s.step)).join('\n');
+}
+
+export function routeFromText(text: string): RouteStep[] {
+  return text
+    .split(/\r?\n/)
+    .map((line) => line.trim())
+    .filter(Boolean)
+    .map((line) => {
+      const at = line.indexOf('|');
+      if (at < 0) return { step: line };
+      const step = line.slice(0, at).trim();
+      const note = line.slice(at + 1).trim();
+      return note ? { step, note } : { step };
+    });
+}

@@ -1,0 +1,126 @@
+import 'server-only';
+import { type Kysely } from 'kysely';
+import { z } from 'zod';
+import { db as defaultDb } from '@/db';
+import type { Database } from '@/db/types';
+import { AppError } from '@/lib/errors';
+import { PlatingInputError } from '@/lib/plating';
+import { assertCan, type Actor } from '@/lib/quotes/access';
+import { predictRun, runAmpHours, type RunCharge, type RunPrediction } from './run-math';
+import { changeWorkOrderState } from './states';
+
+type Db = Kysely<Database>;
+
+const decimal = (label: string) =>
+  z.preprocess((v) => (v === '' || v === undefined ? undefined : typeof v === 'string' ? v.replace(',', '.') : v), z.coerce.number({ error: `Enter ${label}.` }).finite(`Enter ${label}.`).optional());
+const whole = (label: string) => z.coerce.number({ error: `Enter ${label}.` }).int(`Enter a whole number of ${label}.`).min(1, 'Enter at least 1.');
+
+export const runSchema = z
+  .object({
+    workOrderId: z.uuid(),
+    tankId: z.uuid({ error: 'Choose the tank.' }),
+    mode: z.enum(['amps', 'meter'], { error: 'Choose how the current was measured.' }),
+    currentA: decimal('the rectifier current'),
+    meterStartAh: decimal('the meter reading at the start'),
+    meterStopAh: decimal('the meter reading at the end'),
+    minutesPerLoad: decimal('the plating minutes per load'),
+    loads: whole('loads').max(1000),
+    partsPerLoad: whole('parts per load').max(1_000_000),
+    idempotencyKey: z.string().regex(/^[A-Za-z0-9-]{16,64}$/, 'The form is out of date; reload the page.'),
+    confirmBelowMinimum: z.preprocess((v) => v === 'on' || v === 'true' || v === true, z.boolean()),
+  })
+  .superRefine((v, ctx) => {
+    if (v.minutesPerLoad === undefined) ctx.addIssue({ code: 'custom', path: ['minutesPerLoad'], message: 'Enter the plating minutes per load.' });
+    if (v.mode === 'amps' && v.currentA === undefined) ctx.addIssue({ code: 'custom', path: ['currentA'], message: 'Enter the rectifier current.' });
+    if (v.mode === 'meter' && v.meterStartAh === undefined) ctx.addIssue({ code: 'custom', path: ['meterStartAh'], message: 'Enter the meter reading at the start.' });
+    if (v.mode === 'meter' && v.meterStopAh === undefined) ctx.addIssue({ code: 'custom', path: ['meterStopAh'], message: 'Enter the meter reading at the end.' });
+  });
+export type RunInput = z.infer<typeof runSchema>;
+
+export function chargeOf(input: RunInput): RunCharge {
+  return input.mode === 'amps'
+    ? { mode: 'amps', currentA: input.currentA ?? Number.NaN, minutesPerLoad: input.minutesPerLoad ?? Number.NaN, loads: input.loads }
+    : { mode: 'meter', meterStartAh: input.meterStartAh ?? Number.NaN, meterStopAh: input.meterStopAh ?? Number.NaN, minutesPerLoad: input.minutesPerLoad ?? Number.NaN, loads: input.loads };
+}
+
+export const BELOW_MINIMUM_MESSAGE = 'The predicted thickness is below the specification minimum. Check the current and time, or tick "Save anyway" to record the run as it was.';
+
+export type LoggedRun = { id: string; duplicate: boolean; prediction: RunPrediction | null };
+
+/**
+ * Records a plating run. A retried submission with the same idempotency key stores nothing new and
+ * answers with the first run. The first run of a received order moves it to "in process".
+ */
+export async function logPlatingRun(actor: Actor, input: RunInput, conn: Db = defaultDb, now: Date = new Date()): Promise<LoggedRun> {
+  assertCan(actor, 'runs.log');
+  const existing = await conn.selectFrom('plating_runs').select(['id', 'work_order_id']).where('idempotency_key', '=', input.idempotencyKey).executeTakeFirst();
+  if (existing) {
+    if (existing.work_order_id !== input.workOrderId) throw new AppError('CONFLICT', 'This form was already used for another order; reload the page.');
+    return { id: existing.id, duplicate: true, prediction: null };
+  }
+  return conn.transaction().execute(async (trx) => {
+    const wo = await trx
+      .selectFrom('work_orders as w')
+      .innerJoin('parts as p', 'p.id', 'w.part_id')
+      .innerJoin('finishes as f', 'f.id', 'w.finish_id')
+      .select(['w.id', 'w.state', 'p.area_dm2', 'f.element', 'f.ion_charge', 'f.distribution_ratio', 'f.min_thickness_um'])
+      .where('w.id', '=', input.workOrderId)
+      .forUpdate('w')
+      .executeTakeFirst();
+    if (!wo) throw new AppError('NOT_FOUND', 'That work order does not exist.');
+    if (wo.state !== 'received' && wo.state !== 'in_process') {
+      throw new AppError('CONFLICT', wo.state === 'accepted' ? 'Receive the parts before logging a plating run.' : 'Plating is finished on this order; runs can no longer be added.');
+    }
+    const tank = await trx.selectFrom('tanks').select(['id', 'code', 'element', 'ion_charge', 'efficiency', 'rectifier_max_a', 'is_active']).where('id', '=', input.tankId).executeTakeFirst();
+    if (!tank || !tank.is_active || tank.element !== wo.element || tank.ion_charge !== wo.ion_charge || tank.efficiency === null) {
+      throw new AppError('BAD_INPUT', 'Choose an active tank that plates this finish’s metal.', { tankId: ['Choose an active tank that plates this finish’s metal.'] });
+    }
+    if (input.mode === 'amps' && tank.rectifier_max_a !== null && (input.currentA ?? 0) > tank.rectifier_max_a) {
+      throw new AppError('BAD_INPUT', `The rectifier on ${tank.code} gives at most ${tank.rectifier_max_a} A.`, { currentA: [`At most ${tank.rectifier_max_a} A on ${tank.code}.`] });
+    }
+    let ampHours: number;
+    let prediction: RunPrediction;
+    try {
+      ampHours = runAmpHours(chargeOf(input));
+      prediction = predictRun({
+        ampHours, loads: input.loads, partsPerLoad: input.partsPerLoad, areaPerPartDm2: wo.area_dm2, element: wo.element, ionCharge: wo.ion_charge,
+        tankEfficiency: tank.efficiency, distributionRatio: wo.distribution_ratio, minThicknessUm: wo.min_thickness_um,
+      });
+    } catch (err) {
+      if (err instanceof PlatingInputError) throw new AppError('BAD_INPUT', err.message, { [err.field]: [err.message] });
+      throw err;
+    }
+    if (prediction.isBelowMinimum && !input.confirmBelowMinimum) throw new AppError('CONFLICT', BELOW_MINIMUM_MESSAGE, { confirmBelowMinimum: [BELOW_MINIMUM_MESSAGE] });
+    const minutes = (input.minutesPerLoad ?? 0) * input.loads;
+    const inserted = await trx
+      .insertInto('plating_runs')
+      .values({
+        work_order_id: wo.id,
+        tank_id: tank.id,
+        started_at: new Date(now.getTime() - minutes * 60_000),
+        ended_at: now,
+        current_a: input.mode === 'amps' ? (input.currentA ?? null) : null,
+        meter_start_ah: input.mode === 'meter' ? (input.meterStartAh ?? null) : null,
+        meter_stop_ah: input.mode === 'meter' ? (input.meterStopAh ?? null) : null,
+        amp_hours: ampHours,
+        loads: input.loads,
+        parts_per_load: input.partsPerLoad,
+        predicted_thickness_um: prediction.averageThicknessUm,
+        is_below_minimum: prediction.isBelowMinimum,
+        logged_by: actor.id,
+        idempotency_key: input.idempotencyKey,
+      })
+      .onConflict((oc) => oc.column('idempotency_key').doNothing())
+      .returning('id')
+      .executeTakeFirst();
+    if (!inserted) {
+      // A concurrent retry won the race: answer with its run.
+      const first = await trx.selectFrom('plating_runs').select('id').where('idempotency_key', '=', input.idempotencyKey).executeTakeFirstOrThrow();
+      return { id: first.id, duplicate: true, prediction };
+    }
+    if (wo.state === 'received') {
+      await changeWorkOrderState(trx, { workOrderId: wo.id, to: 'in_process', actorId: actor.id, note: `First plating run on ${tank.code}` });
+    }
+    return { id: inserted.id, duplicate: false, prediction };
+  });
+}

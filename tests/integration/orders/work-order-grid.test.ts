@@ -1,0 +1,88 @@
+import { CompiledQuery, sql, type Kysely } from 'kysely';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { db, type Database } from '@/db';
+import { gridQueryFrom, runGridQuery } from '@/lib/grid/server';
+import { orderSql, whereSql } from '@/lib/grid/sql';
+import { WORK_ORDER_GRID_COLUMNS, workOrderGridSelect } from '@/lib/orders/queries';
+import { inRolledBackTransaction } from '../records/helpers';
+import { finishId, makeCustomer, type TestCustomer } from '../quotes/fixtures';
+
+afterAll(() => db.destroy());
+
+// 100 000 work orders of our own, inserted inside a transaction that is rolled back.
+const ROWS = 100_000;
+const OPTS = { columns: WORK_ORDER_GRID_COLUMNS, key: 'w.number', defaultSort: { colId: 'number', dir: 'desc' as const } };
+let cust: TestCustomer;
+let finish: string;
+
+beforeAll(async () => {
+  [cust, finish] = await Promise.all([makeCustomer(), finishId('ZN-B633-SC2')]);
+});
+
+async function withManyOrders<T>(fn: (q: Kysely<Database>) => Promise<T>): Promise<T> {
+  return inRolledBackTransaction(async (trx) => {
+    // Filling the table is the slow part, not what is measured.
+    await sql`set local statement_timeout = '180s'`.execute(trx);
+    await sql`
+      insert into work_orders (number, customer_id, part_id, finish_id, po_number, due_date, quantity_ordered, state, unit_price_cents, pricing_basis, total_cents)
+      select 'W2988-' || lpad(i::text, 6, '0'), ${cust.id}, ${cust.parts.screw}, ${finish}, 'PO-' || (i % 5000),
+             date '2026-01-01' + (i % 400), 100 + i % 900,
+             (array['accepted','received','in_process','plated','baked','inspected','shipped','invoiced'])[1 + i % 8],
+             12.5, 'piece', 1250 * (1 + i % 10)
+      from generate_series(1, ${ROWS}) as i`.execute(trx);
+    await sql`analyze work_orders`.execute(trx);
+    await sql`set local statement_timeout = '15s'`.execute(trx);
+    return fn(trx);
+  });
+}
+
+/** EXPLAIN ANALYZE of the page query the grid would run for this query string. */
+async function planOf(q: Kysely<Database>, qs: string): Promise<string> {
+  const query = gridQueryFrom(new URL(`http://x/api/work-orders?${qs}`), WORK_ORDER_GRID_COLUMNS);
+  const where = whereSql(WORK_ORDER_GRID_COLUMNS, query);
+  let qb = workOrderGridSelect(q);
+  if (where) qb = qb.where(where);
+  const built = orderSql(WORK_ORDER_GRID_COLUMNS, query.sort, OPTS.defaultSort, OPTS.key)
+    .reduce((b, term) => b.orderBy(term), qb)
+    .limit(query.limit)
+    .offset(query.offset)
+    .compile();
+  const r = await q.executeQuery<{ 'QUERY PLAN': string }>(CompiledQuery.raw(`explain (analyze, costs off) ${built.sql}`, [...built.parameters]));
+  return r.rows.map((x) => x['QUERY PLAN']).join('\n');
+}
+
+async function timed(q: Kysely<Database>, qs: string) {
+  const started = performance.now();
+  const page = await runGridQuery(workOrderGridSelect(q), OPTS, gridQueryFrom(new URL(`http://x/api/work-orders?${qs}`), WORK_ORDER_GRID_COLUMNS));
+  return { page, ms: performance.now() - started };
+}
+
+// Time budgets are loose (the shared test machine is busy); the plans are the real check.
+const BUDGET_MS = 3000;
+
+describe('the work-order list with 100,000 orders', () => {
+  it('pages in number order and by due date from their indexes, filters by state, and searches within budget', async () => {
+    await withManyOrders(async (q) => {
+      const plan = await planOf(q, 'offset=0&limit=100');
+      expect(plan).toMatch(/Index Scan Backward using work_orders_number_key/);
+      expect(plan).not.toMatch(/Sort Method: external/);
+      const first = await timed(q, 'offset=0&limit=100');
+      expect(first.page.total).toBeGreaterThanOrEqual(ROWS);
+      expect(first.page.rows[0]!.number).toBe('W2988-100000');
+      expect(first.ms).toBeLessThan(BUDGET_MS);
+
+      expect(await planOf(q, 'limit=100&sort=due_date:asc')).toMatch(/Index Scan using work_orders_due_idx/);
+
+      const filter = encodeURIComponent(JSON.stringify({ state: { filterType: 'text', type: 'equals', filter: 'plated' } }));
+      const plated = await timed(q, `limit=50&filter=${filter}`);
+      expect(plated.page.total).toBeGreaterThanOrEqual(ROWS / 8);
+      expect(plated.page.rows.every((r) => r.state === 'plated')).toBe(true);
+      expect(plated.ms).toBeLessThan(BUDGET_MS);
+
+      const search = await timed(q, 'limit=100&q=W2988-0012');
+      // W2988-001200 … W2988-001299: 100 orders.
+      expect(search.page.total).toBe(100);
+      expect(search.ms).toBeLessThan(BUDGET_MS);
+    });
+  }, 240_000);
+});

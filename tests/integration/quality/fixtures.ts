@@ -1,0 +1,95 @@
+// Lots of our own for the quality tests: a work order on a demo part and finish with one plating
+// run, numbered in a range the shop's counter never reaches (W2099-…), so tests never touch
+// another area's records and never assume empty tables.
+import { randomInt } from 'node:crypto';
+import type { Kysely } from 'kysely';
+import type { Database, WorkOrderState } from '@/db/types';
+import type { Actor } from '@/lib/quality/access';
+
+export type LotOptions = {
+  bake?: boolean;
+  quantity?: number;
+  state?: WorkOrderState;
+  /** Plating end as an instant; defaults to two hours ago. */
+  platingEnd?: Date;
+  ampHours?: number;
+  customerCode?: string;
+};
+
+export async function createLot(db: Kysely<Database>, opts: LotOptions = {}): Promise<{ id: string; number: string }> {
+  const bake = opts.bake ?? false;
+  const customer = await db.selectFrom('customers').select('id').where('code', '=', opts.customerCode ?? 'NGF').executeTakeFirstOrThrow();
+  const part = await db
+    .selectFrom('parts')
+    .select(['id', 'area_dm2'])
+    .where('customer_id', '=', customer.id)
+    .orderBy(bake ? 'hardness_hrc' : 'tensile_mpa', bake ? 'desc' : 'asc')
+    .executeTakeFirstOrThrow();
+  const finish = await db
+    .selectFrom('finishes')
+    .select('id')
+    .where('code', '=', bake ? 'ZN-B633-SC2-HS' : 'ZN-B633-SC2')
+    .executeTakeFirstOrThrow();
+  const tank = await db.selectFrom('tanks').select('id').where('code', '=', 'Z-ZN1').executeTakeFirstOrThrow();
+  const quantity = opts.quantity ?? 40;
+  const number = `W2099-${String(randomInt(1_000_000, 9_999_999))}`;
+  const wo = await db
+    .insertInto('work_orders')
+    .values({
+      number,
+      customer_id: customer.id,
+      part_id: part.id,
+      finish_id: finish.id,
+      po_number: `PO-T${randomInt(10000, 99999)}`,
+      quantity_ordered: quantity,
+      quantity_received: quantity,
+      state: opts.state ?? 'plated',
+      bake_required: bake,
+      unit_price_cents: 25,
+      pricing_basis: 'piece',
+      total_cents: quantity * 25,
+    })
+    .returning('id')
+    .executeTakeFirstOrThrow();
+  const end = opts.platingEnd ?? new Date(Date.now() - 2 * 3_600_000);
+  await db
+    .insertInto('plating_runs')
+    .values({
+      work_order_id: wo.id,
+      tank_id: tank.id,
+      started_at: new Date(end.getTime() - 45 * 60_000),
+      ended_at: end,
+      amp_hours: opts.ampHours ?? 12,
+      loads: 1,
+      parts_per_load: quantity,
+      predicted_thickness_um: 11,
+      is_below_minimum: false,
+    })
+    .execute();
+  return { id: wo.id, number };
+}
+
+export async function actorFor(db: Kysely<Database>, email: string): Promise<Actor & { email: string; customerId: string | null; unitSystem: 'metric' | 'us' }> {
+  const u = await db.selectFrom('users').selectAll().where('email', '=', email).executeTakeFirstOrThrow();
+  return { id: u.id, name: u.name, role: u.role, isActive: u.is_active, email: u.email, customerId: u.customer_id, unitSystem: u.unit_system };
+}
+
+export const SUPERVISOR = 'supervisor@kestrel-plating.test';
+export const PLATER = 'plater@kestrel-plating.test';
+export const ESTIMATOR = 'estimator@kestrel-plating.test';
+export const BUYER = 'buyer@northgate-fastener.test';
+export const OTHER_CUSTOMER = 'quality@halvorsen-valve.test';
+
+/** `count` passing readings, one per part, between 9 and 12 µm (finish minimum 8 µm). */
+export function passingReadings(count: number) {
+  return Array.from({ length: count }, (_, i) => ({ partNo: i + 1, location: 'head flat', method: 'B499' as const, thicknessUm: 9 + (i % 4) }));
+}
+
+export async function errorOf(p: Promise<unknown>): Promise<string> {
+  try {
+    await p;
+    return 'none';
+  } catch (e) {
+    return e instanceof Error ? `${(e as { code?: string }).code ?? e.name}: ${e.message}` : String(e);
+  }
+}
