@@ -22,8 +22,10 @@ ensure_server() {
 # initdb refuses root: run the server as the 'postgres' OS user when we are root.
 RUNAS=()
 choose_dirs() {
-  DATA="$ROOT/.data/pg"
-  SOCK="$ROOT/.data/sock"
+  # PG_CLUSTER names a second, separate cluster (the fault tests stop and start their own).
+  local name="${PG_CLUSTER:-pg}"
+  DATA="$ROOT/.data/$name"
+  SOCK="$ROOT/.data/sock-$name"
   if [ "$(id -u)" -eq 0 ]; then
     id postgres >/dev/null 2>&1 || useradd --system --home /var/lib/postgresql --shell /bin/bash postgres
     RUNAS=(runuser -u postgres --)
@@ -31,8 +33,8 @@ choose_dirs() {
     if ! runuser -u postgres -- test -x "$ROOT"; then
       local h
       h=$(printf '%s' "$ROOT" | sha1sum | cut -c1-12)
-      DATA="/tmp/ampwright-$h/pg"
-      SOCK="/tmp/ampwright-$h/sock"
+      DATA="/tmp/ampwright-$h/$name"
+      SOCK="/tmp/ampwright-$h/sock-$name"
     fi
   fi
 }

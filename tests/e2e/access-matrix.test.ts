@@ -2,24 +2,11 @@
 // every role and a signed-out visitor → allowed or refused, asserted over HTTP against `next start`.
 // Permissions come from the code itself (requirePageUser / withPermission / formAction); a route
 // that asks for none must be listed in PUBLIC below, or this test fails.
-import { randomBytes } from 'node:crypto';
-import pg from 'pg';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { type Permission, roleCan } from '@/lib/auth/roles';
-import type { Role } from '@/db/types';
 import { APP_URL } from '../helpers/browser';
-import { TEST_DATABASE_URL } from '../helpers/test-db';
+import { type Caller, CALLERS, TestSessions } from '../helpers/sessions';
 import { type ActionRoute, type ApiRoute, type Guard, type PageRoute, discoverActions, discoverApiRoutes, discoverPages, sampleUrl } from '../helpers/routes';
-
-type Caller = Role | 'anonymous';
-const CALLERS: Caller[] = ['anonymous', 'owner', 'estimator', 'plater', 'supervisor', 'customer'];
-const DEMO_USER: Record<Role, string> = {
-  owner: 'demo-owner-owner',
-  estimator: 'demo-estimator-estimator',
-  plater: 'demo-plater-plater',
-  supervisor: 'demo-supervisor-supervisor',
-  customer: 'demo-customer-buyer',
-};
 
 // Routes that deliberately ask for no permission, and what everyone gets from them.
 const PUBLIC: Record<string, 'page' | 'redirect' | 'json' | 'signature' | 'any-session'> = {
@@ -35,32 +22,16 @@ const PUBLIC: Record<string, 'page' | 'redirect' | 'json' | 'signature' | 'any-s
 const pages = discoverPages();
 const apis = discoverApiRoutes();
 const actions = discoverActions(process.env.NEXT_DIST_DIR ?? '.next-test');
-const cookies = new Map<Caller, string>();
-const client = new pg.Client({ connectionString: TEST_DATABASE_URL });
+const sessions = new TestSessions();
 
-beforeAll(async () => {
-  await client.connect();
-  for (const role of Object.keys(DEMO_USER) as Role[]) {
-    const id = randomBytes(20).toString('hex');
-    await client.query(`insert into sessions (id, user_id, expires_at) values ($1, $2, now() + interval '1 hour')`, [id, DEMO_USER[role]]);
-    cookies.set(role, `ampwright_session=${id}`);
-  }
-});
-afterAll(async () => {
-  await client.query(`delete from sessions where id = any($1)`, [[...cookies.values()].map((c) => c.split('=')[1])]);
-  await client.end();
-});
+beforeAll(() => sessions.open());
+afterAll(() => sessions.close());
 
 function allowed(guard: Guard, caller: Caller): boolean {
   return guard.kind === 'permission' && caller !== 'anonymous' && roleCan(caller, guard.permission as Permission);
 }
 
-async function request(caller: Caller, url: string, init: RequestInit = {}): Promise<Response> {
-  const headers = new Headers(init.headers);
-  const cookie = cookies.get(caller);
-  if (cookie) headers.set('cookie', cookie);
-  return fetch(`${APP_URL}${url}`, { ...init, headers, redirect: 'manual' });
-}
+const request = (caller: Caller, url: string, init?: RequestInit) => sessions.request(caller, url, init);
 
 describe('every route is in the matrix', () => {
   it('finds routes of all three kinds', () => {
