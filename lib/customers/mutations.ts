@@ -4,7 +4,7 @@ import { db, type Database } from '@/db';
 import { inviteUser } from '@/lib/auth/account';
 import type { SessionUser } from '@/lib/auth/current-user';
 import { AppError } from '@/lib/errors';
-import { writeAudit } from '@/lib/records/audit';
+import { assertCan, writeAudit } from '@/lib/records/audit';
 import { inTransaction } from '@/lib/records/transaction';
 import type { ContactInput, CustomerInput, UpdateCustomerInput } from './schemas';
 
@@ -25,6 +25,7 @@ function columns(input: CustomerInput) {
 }
 
 export async function createCustomer(actor: SessionUser, input: CustomerInput, q: Kysely<Database> = db): Promise<{ customerId: string }> {
+  assertCan(actor, 'customers.write');
   return inTransaction(q, async (trx) => {
     const taken = await trx.selectFrom('customers').select('id').where('code', '=', input.code).executeTakeFirst();
     if (taken) throw DUPLICATE_CODE(input.code);
@@ -35,6 +36,7 @@ export async function createCustomer(actor: SessionUser, input: CustomerInput, q
 }
 
 export async function updateCustomer(actor: SessionUser, input: UpdateCustomerInput, q: Kysely<Database> = db): Promise<void> {
+  assertCan(actor, 'customers.write');
   await inTransaction(q, async (trx) => {
     const current = await trx.selectFrom('customers').select('id').where('id', '=', input.customerId).forUpdate().executeTakeFirst();
     if (!current) throw new AppError('NOT_FOUND', 'That customer does not exist.');
@@ -50,6 +52,7 @@ export async function updateCustomer(actor: SessionUser, input: UpdateCustomerIn
  * module (a customer-role user linked to this customer) and the contact is linked to that user.
  */
 export async function addContact(actor: SessionUser, input: ContactInput, q: Kysely<Database> = db): Promise<{ contactId: string; invited: boolean }> {
+  assertCan(actor, 'customers.write');
   const contactId = await inTransaction(q, async (trx) => {
     const customer = await trx.selectFrom('customers').select('id').where('id', '=', input.customerId).executeTakeFirst();
     if (!customer) throw new AppError('NOT_FOUND', 'That customer does not exist.');
@@ -81,6 +84,7 @@ export async function addContact(actor: SessionUser, input: ContactInput, q: Kys
 
 /** Invites an existing contact to sign in to the customer area (one account per contact). */
 export async function inviteContact(actor: SessionUser, ref: { customerId: string; contactId: string }, q: Kysely<Database> = db): Promise<void> {
+  assertCan(actor, 'customers.write');
   const contact = await q
     .selectFrom('customer_contacts')
     .select(['id', 'name', 'email', 'user_id'])
@@ -96,6 +100,7 @@ export async function inviteContact(actor: SessionUser, ref: { customerId: strin
 }
 
 export async function removeContact(actor: SessionUser, ref: { customerId: string; contactId: string }, q: Kysely<Database> = db): Promise<void> {
+  assertCan(actor, 'customers.write');
   await inTransaction(q, async (trx) => {
     const gone = await trx.deleteFrom('customer_contacts').where('id', '=', ref.contactId).where('customer_id', '=', ref.customerId).executeTakeFirst();
     if (Number(gone.numDeletedRows) === 0) throw new AppError('NOT_FOUND', 'That contact does not exist.');

@@ -7,10 +7,13 @@ import {
   estimateJob,
   PLATING_METALS,
   PlatingInputError,
+  STORAGE_UNIT,
   toStorage,
+  unitInfo,
   unitsOf,
   type JobProcess,
   type Quantity,
+  type UnitId,
   type UnitOf,
   type UnitSystem,
 } from '@/lib/plating';
@@ -21,9 +24,19 @@ import { DRAG_OUT_UNITS, dragOutToStorage } from './display-units';
 import { figureSet, SENSITIVE_KEYS, type FigureSet } from './figures';
 import { DEFAULT_TANK_VOLTS } from './process-library';
 
+// zod's own message would echo a non-finite input back ("received Infinity"); say it in words.
+function kindOf(input: unknown): string {
+  if (typeof input === 'number') return 'a number out of range';
+  if (input === null) return 'null';
+  if (Array.isArray(input)) return 'a list';
+  return typeof input === 'string' ? 'text' : `a ${typeof input}`;
+}
+const number = () =>
+  z.number({ error: (iss) => (iss.input === undefined ? 'Required: a number.' : `Expected a finite number, got ${kindOf(iss.input)}.`) });
+
 function measured<Q extends Quantity>(quantity: Q) {
   const units = unitsOf(quantity) as [UnitOf<Q>, ...UnitOf<Q>[]];
-  return z.strictObject({ value: z.number(), unit: z.enum(units) });
+  return z.strictObject({ value: number(), unit: z.enum(units) });
 }
 
 const ELEMENTS = [...new Set(PLATING_METALS.map((m) => m.element))] as [string, ...string[]];
@@ -33,19 +46,19 @@ export const estimateRequestSchema = z.strictObject({
   thickness: measured('thickness'), // the required minimum on significant surfaces
   currentDensity: measured('currentDensity'),
   element: z.enum(ELEMENTS),
-  charge: z.number().int(),
-  efficiency: z.number(), // cathode current efficiency, a fraction in (0, 1]
-  quantity: z.number().int().default(1),
+  charge: number().int(),
+  efficiency: number(), // cathode current efficiency, a fraction in (0, 1]
+  quantity: number().int().default(1),
   loading: z.enum(['rack', 'barrel']).default('rack'),
-  distributionRatio: z.number().optional(), // minimum ÷ average; default by loading
-  partsPerLoad: z.number().int().optional(), // default: the whole lot in one load
-  rectifierMaxA: z.number().optional(), // default: no rectifier limit
-  tankVolts: z.number().default(DEFAULT_TANK_VOLTS),
-  rectifierEfficiency: z.number().default(DEFAULT_RECTIFIER_EFFICIENCY),
-  dragOut: z.strictObject({ value: z.number(), unit: z.enum(DRAG_OUT_UNITS) }).optional(),
+  distributionRatio: number().optional(), // minimum ÷ average; default by loading
+  partsPerLoad: number().int().optional(), // default: the whole lot in one load
+  rectifierMaxA: number().optional(), // default: no rectifier limit
+  tankVolts: number().default(DEFAULT_TANK_VOLTS),
+  rectifierEfficiency: number().default(DEFAULT_RECTIFIER_EFFICIENCY),
+  dragOut: z.strictObject({ value: number(), unit: z.enum(DRAG_OUT_UNITS) }).optional(),
   bathMetal: measured('concentration').optional(),
   anodes: z.enum(['soluble', 'insoluble']).default('soluble'),
-  anodeLossPercent: z.number().default(0),
+  anodeLossPercent: number().default(0),
   replenishmentSalt: z.string().min(1).max(60).optional(),
   system: z.enum(['metric', 'us']).optional(), // display system; default the caller's preference
 });
@@ -69,13 +82,14 @@ const REQUEST_PATHS: Readonly<Record<string, string>> = {
 };
 
 function zodFields(error: z.ZodError): Record<string, string[]> {
-  const out: Record<string, string[]> = {};
+  // A Map, because a request may name keys such as "valueOf" that a plain object already has.
+  const out = new Map<string, string[]>();
   for (const issue of error.issues) {
     // An unknown key is named by the key itself, not by the object that holds it.
     const keys = issue.code === 'unrecognized_keys' ? issue.keys.map((k) => [...issue.path, k].join('.')) : [issue.path.join('.') || 'body'];
-    for (const key of keys) (out[key] ??= []).push(issue.message);
+    for (const key of keys) out.set(key, [...(out.get(key) ?? []), issue.message]);
   }
-  return out;
+  return Object.fromEntries(out);
 }
 
 function badInput(fields: Record<string, string[]>, message?: string): AppError {
@@ -91,6 +105,13 @@ function requireFinite(set: FigureSet, where: string): FigureSet {
     }
   }
   return set;
+}
+
+// A value so large that converting it overflows (1e308 ft² → dm²) is refused in the caller's words.
+function stored(m: { value: number; unit: UnitId }, path: string): number {
+  const v = toStorage(m.value, m.unit);
+  if (!Number.isFinite(v)) throw badInput({ [`${path}.value`]: [`${m.value} ${m.unit} is too large to convert to ${STORAGE_UNIT[unitInfo(m.unit).quantity]}.`] });
+  return v;
 }
 
 export type EstimateResponse = {
@@ -109,11 +130,11 @@ export function estimateFromRequest(body: unknown, preferred: UnitSystem): Estim
   const r = parsed.data;
   const system = r.system ?? preferred;
   try {
-    const area = toStorage(r.area.value, r.area.unit);
+    const area = stored(r.area, 'area');
     const process: JobProcess = {
       element: r.element,
       charge: r.charge,
-      currentDensityAdm2: toStorage(r.currentDensity.value, r.currentDensity.unit),
+      currentDensityAdm2: stored(r.currentDensity, 'currentDensity'),
       efficiency: r.efficiency,
       loading: r.loading,
       distributionRatio: r.distributionRatio,
@@ -123,12 +144,12 @@ export function estimateFromRequest(body: unknown, preferred: UnitSystem): Estim
       tankVolts: r.tankVolts,
       rectifierEfficiency: r.rectifierEfficiency,
       dragOutLPerM2: r.dragOut ? dragOutToStorage(r.dragOut.value, r.dragOut.unit) : DEFAULT_DRAG_OUT_L_PER_M2[r.loading],
-      bathMetalGPerL: r.bathMetal ? toStorage(r.bathMetal.value, r.bathMetal.unit) : 0,
+      bathMetalGPerL: r.bathMetal ? stored(r.bathMetal, 'bathMetal') : 0,
       anodes: r.anodes,
       anodeLossPercent: r.anodeLossPercent,
       replenishmentSalt: r.replenishmentSalt,
     };
-    const minimumThicknessUm = toStorage(r.thickness.value, r.thickness.unit);
+    const minimumThicknessUm = stored(r.thickness, 'thickness');
     const e = estimateJob({ areaPerPartDm2: area, quantity: r.quantity, minimumThicknessUm, process });
     const lower = e.lowerEfficiency;
     return {

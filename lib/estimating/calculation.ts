@@ -83,7 +83,8 @@ export function computeCalculation(input: CalculationInput): CalculationResult {
  * paths). Shape dimensions keep their own names; anything unmapped goes under `fallback`.
  */
 export function fieldErrorsOf(err: PlatingInputError, map: Readonly<Record<string, string>>, fallback: string): Record<string, string[]> {
-  const key = map[err.field] ?? map[err.field.split('.')[0] ?? ''] ?? fallback;
+  const lookup = (k: string) => (Object.hasOwn(map, k) ? map[k] : undefined);
+  const key = lookup(err.field) ?? lookup(err.field.split('.')[0] ?? '') ?? fallback;
   return { [key]: [err.message] };
 }
 

@@ -1,7 +1,7 @@
 // Reads the workbench form: text in the estimator's units → the stored input in storage units,
 // with a message per field for anything missing or impossible. Range checks here only word the
 // message in the user's units; the engine still judges every value. Pure.
-import { PLATING_METALS, toStorage, type UnitSystem } from '@/lib/plating';
+import { PLATING_METALS, toStorage, UNITS, type UnitId, type UnitSystem } from '@/lib/plating';
 import { measureShapeEntry } from '@/lib/parts/shapes';
 import { CALCULATION_VERSION, type CalculationInput, type Geometry } from './calculation-schema';
 import { dragOutToStorage } from './display-units';
@@ -68,7 +68,9 @@ function readGeometry(form: WorkbenchForm, errors: FieldErrors, read: ReturnType
   }
   if (form.geometryMode === 'area') {
     const area = read('area', form.area, 'Area per part', 'positive');
-    return area === null ? null : { kind: 'area', areaDm2: toStorage(area, form.areaUnit) };
+    if (area === null) return null;
+    const areaDm2 = storedIn(errors, 'area', area, form.areaUnit);
+    return Number.isFinite(areaDm2) ? { kind: 'area', areaDm2 } : null;
   }
   const outcome = measureShapeEntry(form.shape);
   if (!outcome.ok) {
@@ -76,6 +78,13 @@ function readGeometry(form: WorkbenchForm, errors: FieldErrors, read: ReturnType
     return null;
   }
   return { kind: 'shape', shape: outcome.shape };
+}
+
+// Converting a huge value can overflow (1e308 ft² → dm²): say so beside the field instead.
+function storedIn(errors: FieldErrors, key: string, value: number, unit: UnitId): number {
+  const v = toStorage(value, unit);
+  if (!Number.isFinite(v)) errors[key] = [`${value} ${UNITS[unit].symbol} is too large to work with.`];
+  return v;
 }
 
 export type FormReading = { input: CalculationInput | null; geometry: Geometry | null; fieldErrors: FieldErrors };
@@ -106,11 +115,14 @@ export function readForm(form: WorkbenchForm, system: UnitSystem): FormReading {
   const salt = form.replenishmentSalt.trim();
   if (insoluble && salt === '') errors.replenishmentSalt = ['Enter the salt that replaces the metal, e.g. CrO3.'];
 
+  const cdAdm2 = cd === null ? null : storedIn(errors, 'currentDensity', cd, u.currentDensity);
+  const bathGPerL = bathMetal === null ? null : storedIn(errors, 'bathMetal', bathMetal, u.concentration);
+  const minimumUm = minimum === null ? null : storedIn(errors, 'minimumThickness', minimum, u.thickness);
   if (Object.keys(errors).length > 0 || !metal || !geometry) return { input: null, geometry, fieldErrors: errors };
   const process: CalculationInput['process'] = {
     element: metal.element,
     charge: metal.charge,
-    currentDensityAdm2: toStorage(cd!, u.currentDensity),
+    currentDensityAdm2: cdAdm2!,
     efficiency: efficiency! / 100,
     loading: form.loading,
     ...(ratio === undefined ? {} : { distributionRatio: ratio! }),
@@ -119,7 +131,7 @@ export function readForm(form: WorkbenchForm, system: UnitSystem): FormReading {
     rectifierMaxA: maxA!,
     rectifierEfficiency: rectEff! / 100,
     dragOutLPerM2: dragOutToStorage(dragOut!, u.dragOut),
-    bathMetalGPerL: toStorage(bathMetal!, u.concentration),
+    bathMetalGPerL: bathGPerL!,
     anodes: form.anodes,
     anodeLossPercent: anodeLoss ?? 0,
     ...(insoluble ? { replenishmentSalt: salt } : {}),
@@ -131,7 +143,7 @@ export function readForm(form: WorkbenchForm, system: UnitSystem): FormReading {
     hardnessHrc: hardness ?? null,
     tensileMpa: tensile ?? null,
     quantity: quantity!,
-    minimumThicknessUm: toStorage(minimum!, u.thickness),
+    minimumThicknessUm: minimumUm!,
     process,
     finishId: form.finishId || null,
     contact: form.contactMaterial ? { material: form.contactMaterial as NonNullable<CalculationInput['contact']>['material'], environment: form.environment } : null,

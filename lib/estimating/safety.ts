@@ -74,7 +74,7 @@ export type CoatingVerdict = CoatingCheck & { coating: GalvanicMaterial; substra
 export type ContactVerdict = ContactCheck & { coating: GalvanicMaterial; other: GalvanicMaterial; environment: ServiceEnvironment };
 
 export function coatingMaterialOf(element: string): GalvanicMaterial | null {
-  return COATING_MATERIAL[element] ?? null;
+  return Object.hasOwn(COATING_MATERIAL, element) ? (COATING_MATERIAL[element] ?? null) : null;
 }
 
 /** Is the coating sacrificial to the substrate or only a barrier? null where the table has no row. */

@@ -43,6 +43,11 @@ export function directAttachment(
 export const FILE_ATTACHMENTS: FileAttachment[] = [
   // Drawings and models of parts: office staff through the part, the floor through its work orders.
   directAttachment('parts', ['drawing_file_id', 'stl_file_id'], 'customer_id', ['customers.read', 'orders.read']),
+  // Quality records: certificates (their customer too); oven charts and instrument CSVs (staff only,
+  // so the customer column is not consulted).
+  directAttachment('certificates', ['pdf_file_id'], 'customer_id', ['quality.read']),
+  directAttachment('bake_records', ['chart_file_id'], 'work_order_id', ['quality.read'], false),
+  directAttachment('thickness_readings', ['source_file_id'], 'work_order_id', ['quality.read'], false),
 ];
 
 /** The WHERE condition under which `user` may read the file `files.id`. */

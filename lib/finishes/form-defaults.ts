@@ -1,5 +1,5 @@
 // The finish form's starting values, shown in the user's units. Pure.
-import { centsToDollarText } from '@/lib/records/fields';
+import { centsToDollarText, plainNumber } from '@/lib/records/fields';
 import { DISTRIBUTION_RATIO_DEFAULTS, displayUnit, fromStorage, type UnitSystem } from '@/lib/plating';
 import { routeToText, type RouteStep } from './hazards';
 
@@ -30,8 +30,6 @@ type Saved = {
   is_active: boolean;
 };
 
-// Four significant figures without trailing zeros: 8 → "8", 0.7 → "0.7", 0.03937 mil stays.
-const num = (n: number | null) => (n === null ? '' : String(Number(n.toPrecision(4))));
 
 export function finishFormDefaults(f: Saved | null, system: UnitSystem): Record<string, string> {
   const thicknessUnit = displayUnit('thickness', system);
@@ -52,24 +50,24 @@ export function finishFormDefaults(f: Saved | null, system: UnitSystem): Record<
     specText: f.spec_text,
     route: routeToText(f.process_route),
     metal: `${f.element}${f.ion_charge}+`,
-    minThickness: num(fromStorage(f.min_thickness_um, thicknessUnit)),
-    maxThickness: f.max_thickness_um === null ? '' : num(fromStorage(f.max_thickness_um, thicknessUnit)),
+    minThickness: plainNumber(fromStorage(f.min_thickness_um, thicknessUnit)),
+    maxThickness: f.max_thickness_um === null ? '' : plainNumber(fromStorage(f.max_thickness_um, thicknessUnit)),
     thicknessUnit,
     method: f.method,
-    currentDensity: num(fromStorage(f.current_density_adm2, cdUnit)),
+    currentDensity: plainNumber(fromStorage(f.current_density_adm2, cdUnit)),
     currentDensityUnit: cdUnit,
-    efficiencyPercent: num(f.efficiency * 100),
-    distributionRatio: num(f.distribution_ratio),
-    tankVolts: num(f.tank_volts),
+    efficiencyPercent: plainNumber(f.efficiency * 100),
+    distributionRatio: plainNumber(f.distribution_ratio),
+    tankVolts: plainNumber(f.tank_volts),
     partsPerLoad: String(f.parts_per_load),
-    handlingMinutesPerLoad: num(f.handling_minutes_per_load),
+    handlingMinutesPerLoad: plainNumber(f.handling_minutes_per_load),
     maskingPerPiece: centsToDollarText(f.masking_per_piece_cents),
     bakeRequired: f.bake_required ? 'on' : '',
-    bakeThresholdHrc: num(f.bake_threshold_hrc),
-    bakeWindowHours: num(f.bake_window_hours),
-    bakeTemp: f.bake_temp_c === null ? '' : num(fromStorage(f.bake_temp_c, tempUnit)),
+    bakeThresholdHrc: plainNumber(f.bake_threshold_hrc),
+    bakeWindowHours: plainNumber(f.bake_window_hours),
+    bakeTemp: f.bake_temp_c === null ? '' : plainNumber(fromStorage(f.bake_temp_c, tempUnit)),
     temperatureUnit: tempUnit,
-    bakeHours: num(f.bake_hours),
+    bakeHours: plainNumber(f.bake_hours),
     lineId: f.line_id ?? '',
     isActive: f.is_active ? 'on' : '',
   };

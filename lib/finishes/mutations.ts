@@ -3,12 +3,13 @@ import type { Kysely } from 'kysely';
 import { db, type Database } from '@/db';
 import type { SessionUser } from '@/lib/auth/current-user';
 import { AppError } from '@/lib/errors';
-import { writeAudit } from '@/lib/records/audit';
+import { assertCan, writeAudit } from '@/lib/records/audit';
 import { inTransaction } from '@/lib/records/transaction';
 import type { FinishInput } from './schemas';
 
 /** Creates or updates (by `finishId`) a finish specification. */
 export async function saveFinish(actor: SessionUser, input: FinishInput, q: Kysely<Database> = db): Promise<{ finishId: string }> {
+  assertCan(actor, 'quotes.write');
   const { finishId, ...fields } = input;
   const values = { ...fields, process_route: JSON.stringify(fields.process_route) };
   return inTransaction(q, async (trx) => {

@@ -50,13 +50,14 @@ export const finishSchema = z
     lineId: optionalUuid,
     isActive: checkbox,
   })
+  // `when`: run these checks even when other fields failed, so every message shows at once.
   .superRefine((v, ctx) => {
-    if (v.maxThickness !== null && v.maxThickness <= v.minThickness) {
+    if (typeof v.maxThickness === 'number' && typeof v.minThickness === 'number' && v.maxThickness <= v.minThickness) {
       ctx.addIssue({ code: 'custom', path: ['maxThickness'], message: 'The maximum must be more than the minimum.' });
     }
     if (v.bakeRequired && v.bakeTemp === null) ctx.addIssue({ code: 'custom', path: ['bakeTemp'], message: 'Enter the bake temperature from the specification.' });
     if (v.bakeRequired && v.bakeHours === null) ctx.addIssue({ code: 'custom', path: ['bakeHours'], message: 'Enter the bake time from the specification.' });
-  })
+  }, { when: () => true })
   .transform((v, ctx) => {
     const um = (x: number) => toStorage(x, v.thicknessUnit);
     const bakeTempC = v.bakeTemp === null ? null : toStorage(v.bakeTemp, v.temperatureUnit);

@@ -6,7 +6,7 @@ import { z } from 'zod';
 import { db, type Database } from '@/db';
 import type { SessionUser } from '@/lib/auth/current-user';
 import { customerFields } from '@/lib/customers/schemas';
-import { writeAudit } from '@/lib/records/audit';
+import { assertCan, writeAudit } from '@/lib/records/audit';
 import { inTransaction } from '@/lib/records/transaction';
 import { duplicateKeys, type ImportColumn, type ImportOutcome, parseImportCsv, sortProblems, validateRows } from './csv-rows';
 import { conflictOnUnique } from './unique';
@@ -25,6 +25,7 @@ export const CUSTOMER_IMPORT_COLUMNS: readonly ImportColumn[] = [
 const rowSchema = z.object(customerFields);
 
 export async function importCustomers(actor: SessionUser, text: string, q: Kysely<Database> = db): Promise<ImportOutcome> {
+  assertCan(actor, 'customers.write');
   const { rows, problems } = parseImportCsv(text, CUSTOMER_IMPORT_COLUMNS);
   if (problems.some((p) => p.row === 1)) return { ok: false, problems: sortProblems(problems) };
   const { valid, problems: invalid } = validateRows(rows, CUSTOMER_IMPORT_COLUMNS, rowSchema);

@@ -9,7 +9,7 @@ import { customerCodeSchema } from '@/lib/customers/schemas';
 import { AREA_UNITS, partFields } from '@/lib/parts/schemas';
 import { SUBSTRATES, toStorage, type UnitOf } from '@/lib/plating';
 import { numberField } from '@/lib/records/fields';
-import { writeAudit } from '@/lib/records/audit';
+import { assertCan, writeAudit } from '@/lib/records/audit';
 import { inTransaction } from '@/lib/records/transaction';
 import { duplicateKeys, type ImportColumn, type ImportOutcome, parseImportCsv, sortProblems, validateRows } from './csv-rows';
 import { conflictOnUnique } from './unique';
@@ -43,6 +43,7 @@ const keyOf = (d: Pick<PartRow, 'customerCode' | 'partNumber' | 'revision'>) => 
 const describe = (d: PartRow) => `Part ${d.partNumber}${d.revision ? ` rev ${d.revision}` : ''} for ${d.customerCode}`;
 
 export async function importParts(actor: SessionUser, text: string, q: Kysely<Database> = db): Promise<ImportOutcome> {
+  assertCan(actor, 'customers.write');
   const { rows, problems } = parseImportCsv(text, PART_IMPORT_COLUMNS);
   if (problems.some((p) => p.row === 1)) return { ok: false, problems: sortProblems(problems) };
   const { valid, problems: invalid } = validateRows(rows, PART_IMPORT_COLUMNS, rowSchema);

@@ -1,6 +1,7 @@
 // The part form's starting values: a new part, or a saved one shown in the user's units with the
 // area method it was measured by. Pure.
-import { displayUnit, formatNumber, fromStorage, type SubstrateId, type UnitSystem } from '@/lib/plating';
+import { plainNumber } from '@/lib/records/fields';
+import { displayUnit, fromStorage, type SubstrateId, type UnitSystem } from '@/lib/plating';
 import { isShapeKind, type LengthUnit, type ShapeKind } from './shapes';
 
 type Saved = {
@@ -22,7 +23,7 @@ type Saved = {
 };
 
 const text = (n: number | null) => (n === null ? '' : String(n));
-const shown = (n: number) => formatNumber(n, 4);
+const shown = (n: number) => plainNumber(n);
 
 export function partFormDefaults(part: Saved | null, system: UnitSystem, customerId = '') {
   const areaUnit = displayUnit('area', system);

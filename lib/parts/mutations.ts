@@ -5,7 +5,7 @@ import type { SessionUser } from '@/lib/auth/current-user';
 import { AppError } from '@/lib/errors';
 import { readFileFor } from '@/lib/files/access';
 import { FILE_KINDS, CONTENT_TYPE } from '@/lib/files/sniff';
-import { writeAudit } from '@/lib/records/audit';
+import { assertCan, writeAudit } from '@/lib/records/audit';
 import { inTransaction } from '@/lib/records/transaction';
 import { measurePartArea, partWeightG } from './measure';
 import type { PartInput } from './schemas';
@@ -22,6 +22,7 @@ async function checkDrawing(actor: SessionUser, fileId: string | null, trx: Kyse
 
 /** Creates or updates a part (by `partId`), with its area measured on the server. */
 export async function savePart(actor: SessionUser, input: PartInput, q: Kysely<Database> = db): Promise<{ partId: string }> {
+  assertCan(actor, 'customers.write');
   return inTransaction(q, async (trx) => {
     const customer = await trx.selectFrom('customers').select('id').where('id', '=', input.customerId).executeTakeFirst();
     if (!customer) throw new AppError('BAD_INPUT', 'Check the highlighted field.', { customerId: ['Choose the customer.'] });

@@ -11,5 +11,7 @@ export function componentFigures(c: CostComponent, system: UnitSystem): { quanti
     return { quantity: `${formatNumber(lb, 4)} lb`, rate: `${formatUnitPrice(c.rateCents * KG_PER_LB)}/lb` };
   }
   const per = c.unit === 'pc' ? 'piece' : c.unit;
-  return { quantity: `${formatNumber(c.quantity, 4)} ${c.unit}`, rate: `${formatUnitPrice(c.rateCents)}/${per}` };
+  // Pieces and loads are counts: no decimals.
+  const amount = Number.isInteger(c.quantity) ? c.quantity.toLocaleString('en-US') : formatNumber(c.quantity, 4);
+  return { quantity: `${amount} ${c.unit}`, rate: `${formatUnitPrice(c.rateCents)}/${per}` };
 }

@@ -3,7 +3,7 @@ import { type Kysely, sql } from 'kysely';
 import { db, type Database } from '@/db';
 import type { SessionUser } from '@/lib/auth/current-user';
 import { AppError } from '@/lib/errors';
-import { writeAudit } from '@/lib/records/audit';
+import { assertCan, writeAudit } from '@/lib/records/audit';
 import { inTransaction } from '@/lib/records/transaction';
 import { databaseToday } from './queries';
 import type { RateSetInput } from './schemas';
@@ -11,6 +11,7 @@ import type { RateSetInput } from './schemas';
 // A rate set in force or past has priced quotes already, so it never changes; only a set that
 // takes effect after today may be edited. A new set takes effect today or later.
 export async function saveRateSet(actor: SessionUser, input: RateSetInput, q: Kysely<Database> = db): Promise<{ rateSetId: string }> {
+  assertCan(actor, 'rates.manage');
   const { rateSetId, ...fields } = input;
   const values = { ...fields, metal_per_kg_cents: JSON.stringify(fields.metal_per_kg_cents) };
   return inTransaction(q, async (trx) => {

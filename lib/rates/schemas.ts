@@ -29,7 +29,7 @@ const isoDay = z
 
 const money = (label: string) =>
   z.preprocess((v) => (typeof v === 'string' && v.trim() === '' ? undefined : v), z.string({ error: `Enter the ${label.toLowerCase()} rate.` }).pipe(dollarsSchema));
-const optionalMoney = z.preprocess((v) => (typeof v === 'string' && v.trim() === '' ? null : v), dollarsSchema.nullable());
+const optionalMoney = z.preprocess((v) => (v === undefined || v === null || (typeof v === 'string' && v.trim() === '') ? null : v), dollarsSchema.nullable());
 
 const moneyShape = Object.fromEntries(MONEY_FIELDS.map((f) => [f.key, money(f.label)])) as Record<(typeof MONEY_FIELDS)[number]['key'], ReturnType<typeof money>>;
 const metalShape = Object.fromEntries(PRICED_METALS.map((m) => [`metal_${m.element}`, optionalMoney]));

@@ -106,3 +106,8 @@ export function basisPointsToPercentText(bp: number): string {
 export function centsToDollarText(cents: number): string {
   return `${Math.trunc(cents / 100)}.${String(Math.abs(cents % 100)).padStart(2, '0')}`;
 }
+
+/** A number for a form field: four significant figures, no trailing zeros (0.1720 → "0.172"). */
+export function plainNumber(n: number | null, significantFigures = 4): string {
+  return n === null || !Number.isFinite(n) ? '' : String(Number(n.toPrecision(significantFigures)));
+}

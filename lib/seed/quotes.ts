@@ -1,7 +1,7 @@
 // Demo quotes, work orders and plating runs for the invented shop, made through the same business
 // functions the app uses (so the numbers, prices and states are what the app would produce).
 // Idempotent: an audit-log marker says the set is loaded.
-import type { Kysely } from 'kysely';
+import { sql, type Kysely } from 'kysely';
 import type { Database, PricingBasis } from '@/db/types';
 import type { Actor } from '@/lib/quotes/access';
 import { acceptQuote, declineQuote, markQuoteSent, reviseQuote } from '@/lib/quotes/lifecycle';
@@ -21,7 +21,7 @@ async function actor(db: Kysely<Database>, email: string): Promise<Actor> {
   return { id: u.id, role: u.role, customerId: u.customer_id, name: u.name, email: u.email };
 }
 
-async function draft(db: Kysely<Database>, estimator: Actor, customerCode: string, lines: Line[], opts: { isRush?: boolean; notes?: string } = {}) {
+async function draftQuote(db: Kysely<Database>, estimator: Actor, customerCode: string, lines: Line[], opts: { isRush?: boolean; notes?: string } = {}) {
   const customer = await db.selectFrom('customers').select('id').where('code', '=', customerCode).executeTakeFirstOrThrow();
   const q = await createQuote(estimator, { customerId: customer.id, isRush: opts.isRush ?? false, notes: opts.notes ?? '' }, db);
   for (const l of lines) {
@@ -64,6 +64,30 @@ async function runOrder(db: Kysely<Database>, woId: string, people: { plater: Ac
   if (opts.toPlated) await advanceWorkOrder(people.supervisor, { workOrderId: woId, to: 'plated', quantityReceived: undefined, quantityShipped: undefined, note: '' }, db);
 }
 
+/**
+ * The business functions stamp records with the real time; the story above happened over weeks.
+ * Move creation and state-change times back to match the quote and run dates (demo data only).
+ */
+async function backdate(db: Kysely<Database>, quoteIds: string[]): Promise<void> {
+  await sql`update quotes set created_at = coalesce(sent_at, now()) - interval '1 day', updated_at = coalesce(decided_at, sent_at, now())
+            where id = any(${quoteIds}::uuid[])`.execute(db);
+  await sql`
+    update work_order_events e
+    set created_at = case e.to_state
+      when 'accepted' then q.decided_at
+      when 'received' then coalesce(r.first_start - interval '1 hour', q.decided_at + interval '1 day')
+      when 'in_process' then coalesce(r.first_start, q.decided_at + interval '1 day')
+      else coalesce(r.last_end + interval '10 minutes', e.created_at) end
+    from work_orders w
+    join quote_lines l on l.id = w.quote_line_id
+    join quotes q on q.id = l.quote_id
+    left join lateral (select min(started_at) as first_start, max(ended_at) as last_end from plating_runs where work_order_id = w.id) r on true
+    where e.work_order_id = w.id and q.id = any(${quoteIds}::uuid[])`.execute(db);
+  await sql`update work_orders w set created_at = q.decided_at, updated_at = q.decided_at
+            from quote_lines l join quotes q on q.id = l.quote_id
+            where l.id = w.quote_line_id and q.decided_at is not null and q.id = any(${quoteIds}::uuid[])`.execute(db);
+}
+
 export async function seedQuotes(db: Kysely<Database>): Promise<void> {
   const done = await db.selectFrom('audit_log').select('id').where('action', '=', MARKER).executeTakeFirst();
   if (done) return;
@@ -73,6 +97,12 @@ export async function seedQuotes(db: Kysely<Database>): Promise<void> {
   const halvorsen = await actor(db, 'quality@halvorsen-valve.test');
   const now = Date.now();
   const ago = (days: number) => new Date(now - days * DAY);
+  const made: string[] = [];
+  const draft = async (...args: Parameters<typeof draftQuote>) => {
+    const q = await draftQuote(...args);
+    made.push(q.id);
+    return q;
+  };
 
   // A draft still being priced (Brightline has no contact who signs in yet).
   await draft(db, estimator, 'BRL', [
@@ -84,6 +114,7 @@ export async function seedQuotes(db: Kysely<Database>): Promise<void> {
   const open = await draft(db, estimator, 'NGF', [{ part: 'NGF-HX-0816', finish: 'ZN-B633-SC2', quantity: 20000, basis: 'lb' }]);
   await markQuoteSent(estimator, { quoteId: open.id, contactUserId: northgate.id }, db, ago(9));
   const revB = await reviseQuote(estimator, open.id, db, ago(3));
+  made.push(revB.id);
   await markQuoteSent(estimator, { quoteId: revB.id, contactUserId: northgate.id }, db, ago(2));
 
   // Sent long ago and never answered: reads as expired.
@@ -118,5 +149,6 @@ export async function seedQuotes(db: Kysely<Database>): Promise<void> {
   await markQuoteSent(estimator, { quoteId: fresh.id, contactUserId: northgate.id }, db, ago(4));
   await acceptQuote(northgate, { quoteId: fresh.id, poNumber: 'NGF-PO-55391', neededBy: null }, db, ago(1));
 
+  await backdate(db, made);
   await db.insertInto('audit_log').values({ actor_id: estimator.id, action: MARKER, entity: 'seed', entity_id: null }).execute();
 }

@@ -1,15 +1,12 @@
 import type { Metadata } from 'next';
 import Link from 'next/link';
-import { Money } from '@/components/money';
 import { Card } from '@/components/ui/card';
 import { EmptyState } from '@/components/ui/empty-state';
 import { PageHeader } from '@/components/ui/page-header';
-import { Table, TBody, Td, Th, THead, Tr } from '@/components/ui/table';
 import { can, requirePageUser } from '@/lib/auth/current-user';
 import { findInvoices, type InvoiceFilter } from '@/lib/billing/queries';
-import { formatDay } from '@/lib/quotes/format';
 import { BillingTabs } from './_components/billing-tabs';
-import { InvoiceStatusBadge, LINK } from './_components/invoice-view';
+import { InvoiceTable } from './_components/invoice-table';
 
 export const metadata: Metadata = { title: 'Invoices' };
 
@@ -48,40 +45,7 @@ export default async function InvoicesPage({ searchParams }: { searchParams: Pro
         />
       ) : (
         <Card padding="none">
-          <Table caption="Invoices" captionHidden>
-            <THead>
-              <tr>
-                <Th>Invoice</Th>
-                <Th>Customer</Th>
-                <Th>Date</Th>
-                <Th>Due</Th>
-                <Th>Status</Th>
-                <Th numeric>Total</Th>
-                <Th numeric>Open</Th>
-              </tr>
-            </THead>
-            <TBody>
-              {invoices.map((i) => (
-                <Tr key={i.id}>
-                  <Td>
-                    <Link href={`/invoices/${i.id}`} className={LINK}>{i.number}</Link>
-                  </Td>
-                  <Td>{i.customerName}</Td>
-                  <Td>{formatDay(i.issuedOn)}</Td>
-                  <Td>{formatDay(i.dueOn)}</Td>
-                  <Td>
-                    <InvoiceStatusBadge summary={i} />
-                  </Td>
-                  <Td numeric>
-                    <Money cents={i.totalCents} />
-                  </Td>
-                  <Td numeric>
-                    <Money cents={i.openCents} accounting />
-                  </Td>
-                </Tr>
-              ))}
-            </TBody>
-          </Table>
+          <InvoiceTable invoices={invoices} basePath="/invoices" audience="staff" />
         </Card>
       )}
     </div>

@@ -27,8 +27,8 @@ const COLUMNS: ColDef<QuoteRow>[] = [
   { field: 'customer', headerName: 'Customer', filter: text, minWidth: 200 },
   { field: 'status', headerName: 'Status', filter: text, maxWidth: 140, valueFormatter: (p) => (p.value ? QUOTE_STATUS_LABELS[p.value as QuoteStatus] : '') },
   { field: 'total_cents', headerName: 'Total', filter: 'agNumberColumnFilter', type: 'rightAligned', maxWidth: 150, valueFormatter: (p) => (p.value == null ? '' : formatMoney(Number(p.value))) },
-  { field: 'created_at', headerName: 'Created', filter: 'agDateColumnFilter', maxWidth: 150, valueFormatter: (p) => formatDay(p.value) },
-  { field: 'expires_at', headerName: 'Valid until', filter: 'agDateColumnFilter', maxWidth: 150, valueFormatter: (p) => formatDay(p.value) },
+  { field: 'created_at', headerName: 'Created', filter: 'agDateColumnFilter', maxWidth: 150, valueFormatter: (p) => (p.value ? formatDay(p.value) : '') },
+  { field: 'expires_at', headerName: 'Valid until', filter: 'agDateColumnFilter', maxWidth: 150, valueFormatter: (p) => (p.value ? formatDay(p.value) : '') },
   { field: 'estimator', headerName: 'Estimator', filter: text },
 ];
 

@@ -35,7 +35,7 @@ function columns(stateLabels: Record<WorkOrderState, string>): ColDef<WorkOrderR
     { field: 'finish', headerName: 'Finish', filter: text, sortable: false },
     { field: 'po_number', headerName: 'PO', filter: text, sortable: false, maxWidth: 140 },
     { field: 'state', headerName: 'State', filter: text, maxWidth: 150, valueFormatter: (p) => (p.value ? stateLabels[p.value as WorkOrderState] : '') },
-    { field: 'due_date', headerName: 'Due', filter: 'agDateColumnFilter', maxWidth: 140, valueFormatter: (p) => formatDay(p.value) },
+    { field: 'due_date', headerName: 'Due', filter: 'agDateColumnFilter', maxWidth: 140, valueFormatter: (p) => (p.value ? formatDay(p.value) : '') },
     { field: 'quantity_ordered', headerName: 'Ordered', filter: number, sortable: false, maxWidth: 120, type: 'rightAligned' },
     { field: 'quantity_received', headerName: 'Received', filter: number, sortable: false, maxWidth: 120, type: 'rightAligned' },
     { field: 'total_cents', headerName: 'Total', filter: number, sortable: false, maxWidth: 140, type: 'rightAligned', valueFormatter: (p) => (p.value == null ? '' : formatMoney(Number(p.value))) },

@@ -1,14 +1,11 @@
 import type { Metadata } from 'next';
-import Link from 'next/link';
 import { Money } from '@/components/money';
 import { Card } from '@/components/ui/card';
 import { EmptyState } from '@/components/ui/empty-state';
 import { PageHeader } from '@/components/ui/page-header';
-import { Table, TBody, Td, Th, THead, Tr } from '@/components/ui/table';
 import { requirePageUser } from '@/lib/auth/current-user';
 import { findPortalInvoices } from '@/lib/billing/portal';
-import { formatDay } from '@/lib/quotes/format';
-import { InvoiceStatusBadge, LINK } from '../../../(shop)/invoices/_components/invoice-view';
+import { InvoiceTable } from '../../../(shop)/invoices/_components/invoice-table';
 
 export const metadata: Metadata = { title: 'Invoices' };
 
@@ -27,44 +24,7 @@ export default async function PortalInvoicesPage() {
         <EmptyState title="No invoices yet" description="Invoices appear here when we bill shipped orders." />
       ) : (
         <Card padding="none">
-          <Table caption="Invoices" captionHidden>
-            <THead>
-              <tr>
-                <Th>Invoice</Th>
-                <Th>Date</Th>
-                <Th>Due</Th>
-                <Th>Status</Th>
-                <Th numeric>Total</Th>
-                <Th numeric>Open</Th>
-                <Th>PDF</Th>
-              </tr>
-            </THead>
-            <TBody>
-              {invoices.map((i) => (
-                <Tr key={i.id}>
-                  <Td>
-                    <Link href={`/portal/invoices/${i.id}`} className={LINK}>{i.number}</Link>
-                  </Td>
-                  <Td>{formatDay(i.issuedOn)}</Td>
-                  <Td>{formatDay(i.dueOn)}</Td>
-                  <Td>
-                    <InvoiceStatusBadge summary={i} />
-                  </Td>
-                  <Td numeric>
-                    <Money cents={i.totalCents} />
-                  </Td>
-                  <Td numeric>
-                    <Money cents={Math.max(0, i.openCents)} />
-                  </Td>
-                  <Td>
-                    <a className={LINK} href={`/portal/invoices/${i.id}/pdf`} aria-label={`PDF of invoice ${i.number}`}>
-                      PDF
-                    </a>
-                  </Td>
-                </Tr>
-              ))}
-            </TBody>
-          </Table>
+          <InvoiceTable invoices={invoices} basePath="/portal/invoices" audience="customer" />
         </Card>
       )}
     </div>

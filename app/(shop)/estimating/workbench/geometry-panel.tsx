@@ -15,7 +15,7 @@ import { StlUpload } from './stl-upload';
 const MODES: { value: GeometryMode; label: string }[] = [
   { value: 'shape', label: 'Shape' },
   { value: 'area', label: 'Area' },
-  { value: 'stl', label: 'STL file' },
+  { value: 'stl', label: '3D model (STL)' },
 ];
 
 export function GeometryPanel(p: PanelProps & { geometry: GeometryFigures | null }) {

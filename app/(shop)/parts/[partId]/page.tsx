@@ -39,7 +39,7 @@ export default async function PartPage({ params, searchParams }: { params: Promi
         description={part.description || undefined}
       />
       {saved ? <FormMessage tone="success" message="Part added." /> : null}
-      {bake ? <Caution kind="high-strength-steel-bake">{RELIEF_BAKE_CAUTION}</Caution> : null}
+      {bake && !mayWrite ? <Caution kind="high-strength-steel-bake">{RELIEF_BAKE_CAUTION}</Caution> : null}
       <Card title="Summary">
         <dl className="grid gap-x-6 gap-y-1 text-sm sm:grid-cols-[12rem_1fr]">
           <dt className="text-ink-muted">Area per part</dt>

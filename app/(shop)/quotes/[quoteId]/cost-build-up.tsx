@@ -7,8 +7,10 @@ import { formatUnitPrice } from '@/lib/quotes/format';
 import type { LinePrice } from '@/lib/quotes/pricing';
 
 /** The line's cost, cost by cost, then margin, charges and the price: what the estimator checks. */
-export function CostBuildUp({ price, units, caption }: { price: LinePrice; units: UnitSystem; caption: string }) {
+export function CostBuildUp({ price, units, caption, quantity }: { price: LinePrice; units: UnitSystem; caption: string; quantity: number }) {
   const j = price.job;
+  // A load smaller than the rectifier allows is only "limited" when the lot needs more than one load.
+  const perLoad = Math.min(j.partsPerLoad, quantity);
   return (
     <div className="flex flex-col gap-3">
       <Table dense caption={caption} captionHidden>
@@ -79,9 +81,7 @@ export function CostBuildUp({ price, units, caption }: { price: LinePrice; units
           <tr>
             <Td>Computed line total</Td>
             <Td numeric>{formatUnitPrice(price.perPieceCents)} per piece</Td>
-            <Td numeric>
-              {formatUnitPrice(price.unitPriceCents)} {BASIS_LABELS[price.basis]}
-            </Td>
+            <Td numeric>{price.basis === 'piece' ? '' : `${formatUnitPrice(price.unitPriceCents)} ${BASIS_LABELS[price.basis]}`}</Td>
             <Td numeric>
               <Money cents={price.totalCents} />
             </Td>
@@ -92,7 +92,7 @@ export function CostBuildUp({ price, units, caption }: { price: LinePrice; units
         <div>
           <dt>Loads</dt>
           <dd className="tabular text-ink">
-            {j.loads} × {j.partsPerLoad} pc{j.loadLimitedBy === 'rectifier' ? ' (rectifier-limited)' : ''}
+            {j.loads} × {perLoad} pc{j.loadLimitedBy === 'rectifier' && quantity > j.partsPerLoad ? ' (rectifier-limited)' : ''}
           </dd>
         </div>
         <div>

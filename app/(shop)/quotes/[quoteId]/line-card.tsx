@@ -41,7 +41,7 @@ export function QuoteLineCard({ line, units, actions, overrideQuoteId }: Props) 
             </span>
           </p>
         ) : null}
-        <CostBuildUp price={line.cost} units={units} caption={`Cost build-up of line ${line.lineNo}`} />
+        <CostBuildUp price={line.cost} units={units} quantity={line.quantity} caption={`Cost build-up of line ${line.lineNo}`} />
         {overrideQuoteId || actions ? (
           <div className="flex flex-wrap items-start gap-2 border-t border-surface-line pt-3">
             {overrideQuoteId ? <OverrideForm quoteId={overrideQuoteId} lineId={line.id} lineNo={line.lineNo} /> : null}

@@ -10,6 +10,7 @@ import { EmptyState } from '@/components/ui/empty-state';
 import { PageHeader } from '@/components/ui/page-header';
 import { can, requirePageUser } from '@/lib/auth/current-user';
 import { ESTIMATE_CAUTION } from '@/lib/plating';
+import { quoteHazards } from '@/lib/quotes/hazards';
 import { findQuoteChoices, getQuote } from '@/lib/quotes/queries';
 import { canRevise, isEditable, QUOTE_STATUS_LABELS, quoteLabel } from '@/lib/quotes/status';
 import { clearOverrideAction, removeLineAction, resendQuoteAction, reviseQuoteAction } from '../actions';
@@ -34,8 +35,8 @@ export default async function QuotePage({ params }: { params: Promise<{ quoteId:
   const mayPrice = draft && can(user, 'quotes.price');
   const mayWrite = can(user, 'quotes.write');
   const choices = draft && (mayPrice || mayWrite) ? await findQuoteChoices(quote.customer_id) : null;
-  const cautions = [...new Set(quote.lines.flatMap((l) => l.cost.cautions).filter((c) => c !== ESTIMATE_CAUTION))];
-  const needsBake = quote.lines.some((l) => l.cost.bake.applies);
+  const engineNotes = [...new Set(quote.lines.flatMap((l) => l.cost.cautions).filter((c) => c !== ESTIMATE_CAUTION))];
+  const hazards = quoteHazards(quote.lines);
 
   return (
     <div className="flex flex-col gap-5">
@@ -87,12 +88,12 @@ export default async function QuotePage({ params }: { params: Promise<{ quoteId:
         <p className="text-sm text-ink-muted">Before tax. The customer sees the line totals and unit prices, not the cost build-up.</p>
       </Card>
 
-      {needsBake ? <Caution kind="high-strength-steel-bake" /> : null}
-      {cautions.length || quote.lines.length ? (
-        <p className="text-xs text-ink-muted">
-          {cautions.join(' ')} {ESTIMATE_CAUTION}
-        </p>
+      {hazards.length ? (
+        <Caution kind={hazards}>{engineNotes.join(' ')}</Caution>
+      ) : engineNotes.length ? (
+        <p className="text-sm text-ink">{engineNotes.join(' ')}</p>
       ) : null}
+      {quote.lines.length ? <p className="text-xs text-ink-muted">{ESTIMATE_CAUTION}</p> : null}
 
       {choices && mayPrice ? (
         <Card title="Add a line" description="Parts are this customer's; the finish's tank, current density and efficiency drive the calculation.">

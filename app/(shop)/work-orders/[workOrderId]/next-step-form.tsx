@@ -24,11 +24,10 @@ type Props = {
   next: WorkOrderState | null;
   quantityOrdered: number;
   quantityReceived: number;
-  labels: Record<WorkOrderState, string>;
 };
 
 /** The one next step with the input it needs; refusals come back with their reason. */
-export function NextStepForm({ workOrderId, next, quantityOrdered, quantityReceived, labels }: Props) {
+export function NextStepForm({ workOrderId, next, quantityOrdered, quantityReceived }: Props) {
   const [state, action] = useActionState(advanceAction, initialFormState);
   if (!next) return <p className="text-sm text-ink-muted">This order has taken its last step.</p>;
   return (
@@ -45,7 +44,7 @@ export function NextStepForm({ workOrderId, next, quantityOrdered, quantityRecei
       <TextField label="Note (optional)" name="note" defaultValue={state.ok ? '' : state.values?.note} errors={state.fieldErrors?.note} />
       <div>
         <SubmitButton size="lg" pendingLabel="Saving…">
-          {VERBS[next]} → {labels[next]}
+          {VERBS[next]}
         </SubmitButton>
       </div>
     </form>

@@ -98,7 +98,7 @@ export default async function WorkOrderPage({ params }: { params: Promise<{ work
         <Card title="Next step">
           {can(user, 'orders.advance') ? (
             <div className="flex flex-col gap-4">
-              <NextStepForm workOrderId={wo.id} next={next} quantityOrdered={wo.quantity_ordered} quantityReceived={wo.quantity_received} labels={STATE_LABELS} />
+              <NextStepForm workOrderId={wo.id} next={next} quantityOrdered={wo.quantity_ordered} quantityReceived={wo.quantity_received} />
               <details className="text-sm">
                 <summary className="cursor-pointer text-ink-muted">Another step…</summary>
                 <div className="pt-3">

@@ -1,0 +1,129 @@
+import { Card } from '@/components/ui/card';
+import { StatusBadge } from '@/components/ui/status-badge';
+import { Table, TBody, Td, Th, THead, Tr } from '@/components/ui/table';
+import type { UnitSystem } from '@/db/types';
+import { displayUnit, formatStoredQuantity, unitInfo } from '@/lib/plating';
+import { lotEfficiency } from '@/lib/quality/efficiency';
+import type { ThicknessState } from '@/lib/quality/lot-checks';
+import type { LotRecord } from '@/lib/quality/lot-types';
+import { formatShopTime } from '@/lib/quality/shop-time';
+import { CsvForm } from './csv-form';
+import { ReadingsForm } from './readings-form';
+import { VoidReadingForm } from './small-forms';
+
+type Props = { lot: LotRecord; t: ThicknessState; units: UnitSystem; tz: string; canRecord: boolean; canVoid: boolean; open: boolean };
+
+const pct = (x: number) => `${(x * 100).toFixed(1)} %`;
+
+export function ThicknessCard({ lot, t, units, tz, canRecord, canVoid, open }: Props) {
+  const q = (um: number | null | undefined) => (um === null || um === undefined ? '—' : formatStoredQuantity(um, 'thickness', units));
+  const f = lot.finish;
+  const s = t.summary;
+  const eff = s ? lotEfficiency({ element: f.element, ionCharge: f.ionCharge, partAreaDm2: lot.part.areaDm2, measuredMeanUm: s.mean, runs: lot.runs }) : null;
+  const tank = eff?.ok ? lot.runs.find((r) => r.tankId === eff.tankId) : undefined;
+  const unit = unitInfo(displayUnit('thickness', units)).symbol;
+  const remaining = Math.max(t.sample.sampleSize - t.partsMeasured, 1);
+  const firstPart = lot.readings.reduce((m, r) => Math.max(m, r.partNo), 0) + 1;
+  return (
+    <Card
+      title="Thickness"
+      description={`${f.specText || f.name}: minimum ${q(f.minThicknessUm)} on significant surfaces${f.maxThicknessUm ? `, maximum ${q(f.maxThicknessUm)}` : ''}.`}
+    >
+      <div className="flex flex-col gap-4">
+        <p className="text-sm">
+          <strong className="text-lg tabular">Measure {t.sample.sampleSize} parts</strong>{' '}
+          {t.sample.inspectAll ? `(every part of the lot of ${t.sample.lotSize})` : `from the lot of ${t.sample.lotSize} (code letter ${t.sample.codeLetter})`} ·{' '}
+          <span className="text-ink-muted">
+            {t.sample.planName} — {t.sample.source}
+          </span>
+        </p>
+        <div className="flex flex-wrap gap-2">
+          <StatusBadge status={t.count.ok ? 'ok' : 'none'} label={`${t.partsMeasured} of ${t.sample.sampleSize} parts measured`} />
+          {lot.readings.length ? <StatusBadge status={t.pass.ok ? 'ok' : 'out'} label={t.pass.ok ? 'Readings conform' : `${t.unresolved.length} failing`} /> : null}
+        </div>
+        {s ? (
+          <dl className="grid grid-cols-2 gap-x-6 gap-y-1 text-sm sm:grid-cols-5">
+            {[
+              ['Readings', String(s.count)],
+              ['Mean', q(s.mean)],
+              ['Minimum', q(s.min)],
+              ['Maximum', q(s.max)],
+              ['Std deviation', s.stdDev === null ? '— (one reading)' : q(s.stdDev)],
+            ].map(([k, v]) => (
+              <div key={k}>
+                <dt className="text-ink-muted">{k}</dt>
+                <dd className="text-base font-semibold tabular">{v}</dd>
+              </div>
+            ))}
+          </dl>
+        ) : null}
+        {eff?.ok ? (
+          <p className="text-sm">
+            Predicted from {eff.ampHours.toFixed(1)} A·h over {formatStoredQuantity(eff.areaDm2, 'area', units)}: average {q(eff.predictedUm)}; measured mean{' '}
+            {eff.ratioToPredicted !== null ? `${(eff.ratioToPredicted * 100).toFixed(0)} % of that` : q(s?.mean)}. Current efficiency measured in {tank?.tankCode}:{' '}
+            <strong>{pct(eff.efficiency)}</strong>. Readings on the thinnest surfaces make this a low estimate.
+          </p>
+        ) : eff ? (
+          <p className="text-sm text-ink-muted">Current efficiency not computed: {eff.reason}</p>
+        ) : null}
+        {lot.readings.length ? (
+          <Table dense caption="Readings" captionHidden>
+            <THead>
+              <tr>
+                <Th numeric>Part</Th>
+                <Th>Location</Th>
+                <Th>Method</Th>
+                <Th numeric>Thickness</Th>
+                <Th>Verdict</Th>
+                <Th>Recorded</Th>
+                {canVoid && open ? <Th>Void</Th> : null}
+              </tr>
+            </THead>
+            <TBody>
+              {lot.readings.map((r) => (
+                <Tr key={r.id}>
+                  <Td numeric>{r.partNo}</Td>
+                  <Td>{r.location}</Td>
+                  <Td>ASTM {r.method}</Td>
+                  <Td numeric>{q(r.thicknessUm)}</Td>
+                  <Td>
+                    {r.status === 'pass' ? (
+                      <StatusBadge status="ok" label="Conforms" size="sm" />
+                    ) : (
+                      <StatusBadge status="out" label={r.status === 'below_minimum' ? 'Below minimum' : 'Above maximum'} size="sm" />
+                    )}
+                  </Td>
+                  <Td className="text-xs text-ink-muted">
+                    {formatShopTime(r.recordedAt, tz)} · {r.recordedByName ?? '—'} {r.entry === 'csv' ? '· CSV' : ''}
+                  </Td>
+                  {canVoid && open ? (
+                    <Td>
+                      <VoidReadingForm workOrderId={lot.order.id} readingId={r.id} />
+                    </Td>
+                  ) : null}
+                </Tr>
+              ))}
+            </TBody>
+          </Table>
+        ) : null}
+        {lot.voidedReadingCount ? <p className="text-xs text-ink-muted">{lot.voidedReadingCount} void readings are kept on record and not counted.</p> : null}
+        {canRecord && open ? (
+          <>
+            <details open={lot.readings.length === 0} className="rounded-md border border-surface-line p-3">
+              <summary className="cursor-pointer font-medium">Enter readings by hand</summary>
+              <div className="pt-3">
+                <ReadingsForm workOrderId={lot.order.id} firstPartNo={firstPart} rows={remaining} unit={unit} minimumText={q(f.minThicknessUm)} />
+              </div>
+            </details>
+            <details className="rounded-md border border-surface-line p-3">
+              <summary className="cursor-pointer font-medium">Upload an instrument's CSV</summary>
+              <div className="pt-3">
+                <CsvForm workOrderId={lot.order.id} />
+              </div>
+            </details>
+          </>
+        ) : null}
+      </div>
+    </Card>
+  );
+}

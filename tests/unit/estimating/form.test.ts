@@ -1,0 +1,109 @@
+import { describe, expect, it } from 'vitest';
+import { calculationInputSchema } from '@/lib/estimating/calculation-schema';
+import { readForm } from '@/lib/estimating/form-read';
+import { defaultForm, formFromInput, type WorkbenchForm } from '@/lib/estimating/form-state';
+import { freeProcessFor } from '@/lib/estimating/process-library';
+import { recomputeWorkbench } from '@/lib/estimating/recompute';
+
+const usForm = (patch: Partial<WorkbenchForm> = {}): WorkbenchForm => ({ ...defaultForm('us', []), ...patch });
+const metricForm = (patch: Partial<WorkbenchForm> = {}): WorkbenchForm => ({ ...defaultForm('metric', []), ...patch });
+
+function inputOf(form: WorkbenchForm, system: 'metric' | 'us') {
+  const r = readForm(form, system);
+  expect(r.fieldErrors).toEqual({});
+  return r.input!;
+}
+
+describe('reading the form in US units', () => {
+  const input = inputOf(
+    usForm({ minimumThickness: '0.3', currentDensity: '20', bathMetal: '10', dragOut: '1', shape: { kind: 'block', unit: 'in', dims: { lengthMm: '2', widthMm: '1', heightMm: '0.5' }, flags: {} } }),
+    'us',
+  );
+
+  it('converts mil, A/ft², oz/gal and gal/1000 ft² to storage units with the exact factors', () => {
+    // Source: NIST SP 811 App. B.8: 1 in = 25.4 mm exactly, so 0.3 mil = 7.62 µm.
+    expect(input.minimumThicknessUm).toBeCloseTo(7.62, 12);
+    // Source: NIST SP 811 App. B.8: 1 ft² = 0.09290304 m² = 9.290304 dm², so 20 A/ft² = 2.15278 A/dm².
+    expect(input.process.currentDensityAdm2).toBeCloseTo(20 / 9.290304, 12);
+    // Source: NIST SP 811 App. B.8 (1 oz = 28.349523125 g, 1 US gal = 3.785411784 L); reference §1.1 rounds it to 7.4892 g/L.
+    expect(input.process.bathMetalGPerL).toBeCloseTo(74.892, 3);
+    // Source: NIST SP 811 App. B.8: 3.785411784 L per 92.90304 m² (1000 ft²).
+    expect(input.process.dragOutLPerM2).toBeCloseTo(3.785411784 / 92.90304, 12);
+    expect(input.process.efficiency).toBeCloseTo(freeProcessFor('Ni', 2).efficiency, 12);
+  });
+
+  it('measures a 2 × 1 × 0.5 in block as 7 in² = 0.451612 dm²', () => {
+    // Area by hand: 2(2·1 + 2·0.5 + 1·0.5) = 7 in²; NIST SP 811: 1 in² = 6.4516 cm².
+    const view = recomputeWorkbench(usForm({ shape: { kind: 'block', unit: 'in', dims: { lengthMm: '2', widthMm: '1', heightMm: '0.5' }, flags: {} } }), 'us');
+    expect(view.geometry!.areaDm2).toBeCloseTo(0.451612, 12);
+    // Volume 1 in³ = 16.387064 cm³ (2.54³); carbon steel at 7.85 g/cm³ (typical handbook value).
+    expect(view.geometry!.volumeCm3).toBeCloseTo(16.387064, 9);
+    expect(view.geometry!.weightG).toBeCloseTo(16.387064 * 7.85, 9);
+  });
+
+  it('shows a stored calculation again in either system and reads it back unchanged', () => {
+    expect(calculationInputSchema.safeParse(input).success).toBe(true);
+    for (const system of ['us', 'metric'] as const) {
+      const again = inputOf(formFromInput(input, system), system);
+      expect(again.minimumThicknessUm).toBeCloseTo(input.minimumThicknessUm, 9);
+      expect(again.process.currentDensityAdm2).toBeCloseTo(input.process.currentDensityAdm2, 9);
+      expect(again.process.dragOutLPerM2).toBeCloseTo(input.process.dragOutLPerM2, 9);
+      expect(again.geometry).toEqual(expect.objectContaining({ kind: 'shape' }));
+    }
+    expect(formFromInput(input, 'metric').minimumThickness).toBe('7.62');
+    expect(formFromInput(input, 'metric').shape.dims.lengthMm).toBe('50.8');
+  });
+});
+
+describe('field messages', () => {
+  it('names each missing or impossible value in the user’s words, never NaN', () => {
+    const view = recomputeWorkbench(
+      metricForm({ quantity: '', efficiencyPct: '120', currentDensity: 'abc', partsPerLoad: '2.5', dragOut: '-1', distributionRatio: '1.4' }),
+      'metric',
+    );
+    expect(view.result).toBeNull();
+    expect(view.fieldErrors).toEqual({
+      quantity: ['Enter the quantity.'],
+      efficiencyPct: ['Cathode efficiency must be more than 0 % and at most 100 %; got 120.'],
+      currentDensity: ['Current density must be a number; got "abc".'],
+      partsPerLoad: ['Parts per load must be a whole number of at least 1; got 2.5.'],
+      dragOut: ['Drag-out cannot be negative; got -1.'],
+      distributionRatio: ['Distribution ratio must be more than 0 and at most 1 (minimum ÷ average); got 1.4.'],
+    });
+    expect(JSON.stringify(view)).not.toMatch(/NaN|Infinity/);
+  });
+
+  it('puts engine messages beside the field that caused them', () => {
+    expect(recomputeWorkbench(metricForm({ rectifierMaxA: '1' }), 'metric').fieldErrors.rectifierMaxA?.[0]).toMatch(/more than the rectifier's 1 A/);
+    expect(recomputeWorkbench(metricForm({ anodes: 'insoluble', replenishmentSalt: 'Xq9' }), 'metric').fieldErrors.replenishmentSalt?.[0]).toMatch(/Cannot read the formula "Xq9"/);
+    expect(recomputeWorkbench(metricForm({ anodes: 'insoluble', replenishmentSalt: ' ' }), 'metric').fieldErrors.replenishmentSalt).toEqual(['Enter the salt that replaces the metal, e.g. CrO3.']);
+    const tube = recomputeWorkbench(metricForm({ shape: { kind: 'tube', unit: 'mm', dims: { outerDiameterMm: '10', innerDiameterMm: '12', lengthMm: '50' }, flags: {} } }), 'metric');
+    expect(tube.fieldErrors.dim_innerDiameterMm?.[0]).toMatch(/must be smaller than the outside diameter/);
+    // 1e300 dm² per part cannot make a finite lot area: the area box gets the message.
+    const huge = recomputeWorkbench(metricForm({ geometryMode: 'area', area: '1e300', areaUnit: 'dm2', quantity: '1e9', rectifierMaxA: '1e308', currentDensity: '0.001' }), 'metric');
+    expect(Object.keys(huge.fieldErrors)).toEqual(['area']);
+    const overflow = recomputeWorkbench(usForm({ geometryMode: 'area', area: '1e308', areaUnit: 'ft2' }), 'us');
+    expect(overflow.fieldErrors).toEqual({ area: ['1e+308 ft² is too large to work with.'] });
+    expect(JSON.stringify(huge)).not.toMatch(/NaN|Infinity/);
+  });
+
+  it('asks for an STL file when STL is chosen and none is measured', () => {
+    expect(recomputeWorkbench(metricForm({ geometryMode: 'stl' }), 'metric').fieldErrors).toEqual({ stl: ['Choose an STL file of the part.'] });
+  });
+});
+
+describe('recompute time', () => {
+  it('recomputes well inside one 16 ms frame', () => {
+    const form = defaultForm('us', []);
+    const times: number[] = [];
+    for (let i = 0; i < 400; i++) {
+      const t0 = performance.now();
+      recomputeWorkbench({ ...form, quantity: String(100 + i) }, 'us');
+      times.push(performance.now() - t0);
+    }
+    times.sort((a, b) => a - b);
+    const median = times[times.length >> 1]!;
+    console.log(`[workbench] recompute median ${median.toFixed(3)} ms, worst ${times.at(-1)!.toFixed(3)} ms over ${times.length} runs (frame budget 16 ms)`);
+    expect(median).toBeLessThan(16);
+  });
+});
