@@ -14,6 +14,7 @@ export const STAFF_NAV: NavItem[] = [
   { href: '/estimating/workbench', label: 'Workbench', permission: 'plating.estimate' },
   { href: '/quotes', label: 'Quotes', permission: 'quotes.read' },
   { href: '/work-orders', label: 'Work orders', permission: 'orders.read' },
+  { href: '/quality', label: 'Quality', permission: 'quality.read' },
   { href: '/customers', label: 'Customers', permission: 'customers.read' },
   { href: '/parts', label: 'Parts', permission: 'customers.read' },
   { href: '/finishes', label: 'Finishes', permission: 'quotes.read' },
@@ -28,6 +29,7 @@ export const CUSTOMER_NAV: NavItem[] = [
   { href: '/portal', label: 'Overview', permission: 'portal.use' },
   { href: '/portal/quotes', label: 'Quotes', permission: 'portal.use' },
   { href: '/portal/orders', label: 'Orders', permission: 'portal.use' },
+  { href: '/portal/certificates', label: 'Certificates', permission: 'portal.use' },
   { href: '/portal/invoices', label: 'Invoices', permission: 'portal.use' },
 ];
 

@@ -4,7 +4,6 @@
 import { z } from 'zod';
 import {
   DISTRIBUTION_RATIO_DEFAULTS,
-  estimateJob,
   PLATING_METALS,
   PlatingInputError,
   STORAGE_UNIT,
@@ -19,7 +18,7 @@ import {
 } from '@/lib/plating';
 import { AppError } from '@/lib/errors';
 import { DEFAULT_DRAG_OUT_L_PER_M2, DEFAULT_RECTIFIER_EFFICIENCY } from '@/lib/quotes/process';
-import { fieldErrorsOf } from './calculation';
+import { estimateJobChecked, fieldErrorsOf } from './calculation';
 import { DRAG_OUT_UNITS, dragOutToStorage } from './display-units';
 import { figureSet, SENSITIVE_KEYS, type FigureSet } from './figures';
 import { DEFAULT_TANK_VOLTS } from './process-library';
@@ -32,7 +31,15 @@ function kindOf(input: unknown): string {
   return typeof input === 'string' ? 'text' : `a ${typeof input}`;
 }
 const number = () =>
-  z.number({ error: (iss) => (iss.input === undefined ? 'Required: a number.' : `Expected a finite number, got ${kindOf(iss.input)}.`) });
+  z.number({
+    error: (iss) => {
+      if (iss.input === undefined) return 'Required: a number.';
+      if (typeof iss.input === 'number' && Number.isFinite(iss.input)) {
+        return iss.code === 'invalid_type' ? `Expected a whole number, got ${iss.input}.` : `${iss.input} is outside the range of whole numbers this accepts.`;
+      }
+      return `Expected a finite number, got ${kindOf(iss.input)}.`;
+    },
+  });
 
 function measured<Q extends Quantity>(quantity: Q) {
   const units = unitsOf(quantity) as [UnitOf<Q>, ...UnitOf<Q>[]];
@@ -70,6 +77,7 @@ const REQUEST_PATHS: Readonly<Record<string, string>> = {
   areaPerPartDm2: 'area.value',
   areaDm2: 'area.value',
   minimumThicknessUm: 'thickness.value',
+  thicknessUm: 'thickness.value',
   depositMassG: 'thickness.value',
   currentDensityAdm2: 'currentDensity.value',
   dragOutLPerM2: 'dragOut.value',
@@ -150,7 +158,7 @@ export function estimateFromRequest(body: unknown, preferred: UnitSystem): Estim
       replenishmentSalt: r.replenishmentSalt,
     };
     const minimumThicknessUm = stored(r.thickness, 'thickness');
-    const e = estimateJob({ areaPerPartDm2: area, quantity: r.quantity, minimumThicknessUm, process });
+    const e = estimateJobChecked({ areaPerPartDm2: area, quantity: r.quantity, minimumThicknessUm, process });
     const lower = e.lowerEfficiency;
     return {
       system,

@@ -8,6 +8,7 @@ import {
   partMassG,
   PlatingInputError,
   type JobEstimate,
+  type JobInput,
   type SubstrateId,
 } from '@/lib/plating';
 import type { BakeRequirement } from '@/lib/quality/bake';
@@ -57,9 +58,31 @@ export function measureGeometry(geometry: Geometry, substrate: SubstrateId): Geo
   }
 }
 
+/**
+ * estimateJob with two guards for inputs the engine accepts one by one but cannot combine: a
+ * minimum ÷ distribution ratio too large to represent (e.g. a ratio of 5e-324), and, as a net,
+ * any engine message that would show "Infinity" or "NaN" to the user.
+ */
+export function estimateJobChecked(job: JobInput): JobEstimate {
+  const ratio = job.process.distributionRatio;
+  const min = job.minimumThicknessUm;
+  if (typeof ratio === 'number' && ratio > 0 && min > 0 && Number.isFinite(min) && !Number.isFinite(min / ratio)) {
+    const field = min > 1e300 ? 'minimumThicknessUm' : 'distributionRatio';
+    throw new PlatingInputError(field, `A minimum of ${min} µm with a distribution ratio of ${ratio} gives an average thickness too large to work with.`);
+  }
+  try {
+    return estimateJob(job);
+  } catch (e) {
+    if (e instanceof PlatingInputError && /\b(NaN|Infinity)\b/.test(e.message)) {
+      throw new PlatingInputError(e.field, 'These inputs together are outside the range this calculation can represent; check their scale.');
+    }
+    throw e;
+  }
+}
+
 export function computeCalculation(input: CalculationInput): CalculationResult {
   const geometry = measureGeometry(input.geometry, input.substrate);
-  const estimate = estimateJob({
+  const estimate = estimateJobChecked({
     areaPerPartDm2: geometry.areaDm2,
     quantity: input.quantity,
     minimumThicknessUm: input.minimumThicknessUm,
@@ -93,6 +116,7 @@ export const INPUT_PATHS: Readonly<Record<string, string>> = {
   areaPerPartDm2: 'geometry',
   quantity: 'quantity',
   minimumThicknessUm: 'minimumThicknessUm',
+  thicknessUm: 'minimumThicknessUm',
   hardnessHrc: 'hardnessHrc',
   tensileMpa: 'tensileMpa',
   element: 'process.element',

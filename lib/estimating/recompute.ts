@@ -11,6 +11,7 @@ import type { WorkbenchForm } from './form-state';
 const FORM_FIELDS: Readonly<Record<string, string>> = {
   quantity: 'quantity',
   minimumThicknessUm: 'minimumThickness',
+  thicknessUm: 'minimumThickness',
   depositMassG: 'minimumThickness',
   currentDensityAdm2: 'currentDensity',
   efficiency: 'efficiencyPct',

@@ -47,6 +47,8 @@ export const FILE_ATTACHMENTS: FileAttachment[] = [
   // so the customer column is not consulted).
   directAttachment('certificates', ['pdf_file_id'], 'customer_id', ['quality.read']),
   directAttachment('bake_records', ['chart_file_id'], 'work_order_id', ['quality.read'], false),
+  // Hull cell panel photos: staff who may read bath records (no customer access).
+  directAttachment('hull_cell_panels', ['file_id'], 'tank_id', ['bath.read'], false),
   directAttachment('thickness_readings', ['source_file_id'], 'work_order_id', ['quality.read'], false),
 ];
 

@@ -7,6 +7,7 @@ import { db } from '@/db';
 import type { Database } from '@/db/types';
 import { ROLE_LABELS } from '@/lib/auth/roles';
 import { AppError } from '@/lib/errors';
+import { fileDownloadResponse } from '@/lib/files/download';
 import { readFile, storeFile } from '@/lib/files/store';
 import { nextDocumentNumber } from '@/lib/quotes/numbering';
 import type { SessionUser } from '@/lib/auth/current-user';
@@ -113,4 +114,11 @@ export async function certificatePdfFor(user: SessionUser, certificateId: string
   const cert = await q.executeTakeFirst();
   if (!cert) return null;
   return readFile(cert.pdf_file_id);
+}
+
+/** The HTTP answer for a certificate's PDF: shown in the browser unless `?download=1`; 404 for a foreign or unknown id. */
+export async function certificatePdfResponse(req: Request, user: SessionUser, certificateId: string): Promise<Response> {
+  const file = await certificatePdfFor(user, certificateId);
+  if (!file) throw new AppError('NOT_FOUND', 'That certificate does not exist.');
+  return fileDownloadResponse(file, new URL(req.url).searchParams.get('download') !== '1');
 }

@@ -6,6 +6,7 @@ import { AppError } from '@/lib/errors';
 import { type Actor, audit, requireActor } from './access';
 import { validateSamplingTable, type SamplingRow } from './sampling';
 import { insertPlanRows } from './sampling-store';
+import { getActiveSamplingPlan } from './lot';
 
 export type PlanInput = { name: string; source: string; rows: SamplingRow[] };
 
@@ -43,4 +44,9 @@ export async function findSamplingPlanHistory() {
     .orderBy('s.created_at', 'desc')
     .limit(20)
     .execute();
+}
+
+/** The plan in force, read with the app's database. */
+export async function getActivePlan() {
+  return getActiveSamplingPlan(db);
 }

@@ -22,7 +22,14 @@ export async function seedBilling(db: Kysely<Database>): Promise<void> {
   const done = await db.selectFrom('settings').select('key').where('key', '=', DONE_KEY).executeTakeFirst();
   if (done) return;
   const owner = await db.selectFrom('users').select('id').where('role', '=', 'owner').orderBy('created_at').executeTakeFirst();
-  const shipped = await db.selectFrom('work_orders').select(['id', 'customer_id']).where('state', '=', 'shipped').orderBy('number').execute();
+  // Only orders that came from demo quotes: test fixtures made without a quote are left alone.
+  const shipped = await db
+    .selectFrom('work_orders')
+    .select(['id', 'customer_id'])
+    .where('state', '=', 'shipped')
+    .where('quote_line_id', 'is not', null)
+    .orderBy('number')
+    .execute();
   if (!owner || shipped.length === 0) return; // nothing shipped yet: try again on the next seed
 
   const made: string[] = [];

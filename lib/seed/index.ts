@@ -5,13 +5,17 @@ import { seedBilling } from './billing';
 import { seedCoreRecords } from './core-records';
 import { seedFoundation } from './foundation';
 import { seedQuotes } from './quotes';
+import { seedQuality } from './quality';
+import { seedRecords } from './records';
 
 // The demo data set, shared by the demo start command and the tests.
 export async function seedDemo(db: Kysely<Database>): Promise<void> {
   await seedFoundation(db);
   await seedCoreRecords(db);
+  await seedRecords(db);
   await seedBath(db);
   await seedQuotes(db);
+  await seedQuality(db); // after the orders: measures, bakes, certifies and ships plated lots
   await seedBilling(db); // after the orders: bills shipped work orders
 }
 

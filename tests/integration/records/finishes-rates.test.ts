@@ -125,15 +125,20 @@ describe('rate sets', () => {
     });
   });
 
-  it('refuses an estimator, a date in the past and a second set on the same date, writing nothing', async () => {
+  it('refuses an estimator, a date in the past and a second set on the same date, writing nothing for each', async () => {
     await inRolledBackTransaction(async (trx) => {
       const [estimator, owner] = await Promise.all([sessionUserByEmail('estimator@kestrel-plating.test'), sessionUserByEmail('owner@kestrel-plating.test')]);
       const today = await databaseToday(trx);
       const before = (await findRateSets(today, trx)).length;
       expect(await refusal(saveRateSet(estimator, rateSetSchema.parse({ ...RATES, effectiveFrom: addDays(today, 30) }), trx))).toBe('FORBIDDEN: "You are not allowed to do this."');
       expect(await refusal(saveRateSet(owner, rateSetSchema.parse({ ...RATES, effectiveFrom: addDays(today, -1) }), trx))).toMatch(/^BAD_INPUT: \{"effectiveFrom":\["Rates cannot take effect in the past/);
-      expect(await refusal(saveRateSet(owner, rateSetSchema.parse({ ...RATES, effectiveFrom: '2026-01-01' }), trx))).toMatch(/^(BAD_INPUT|CONFLICT)/);
       expect((await findRateSets(today, trx)).length).toBe(before);
+      const later = addDays(today, 800);
+      await saveRateSet(owner, rateSetSchema.parse({ ...RATES, effectiveFrom: later }), trx);
+      expect(await refusal(saveRateSet(owner, rateSetSchema.parse({ ...RATES, effectiveFrom: later }), trx))).toBe(
+        'CONFLICT: {"effectiveFrom":["Another rate set already takes effect on that date. Edit that one instead."]}',
+      );
+      expect((await findRateSets(today, trx)).length).toBe(before + 1);
     });
   });
 });

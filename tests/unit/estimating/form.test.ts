@@ -84,6 +84,8 @@ describe('field messages', () => {
     expect(Object.keys(huge.fieldErrors)).toEqual(['area']);
     const overflow = recomputeWorkbench(usForm({ geometryMode: 'area', area: '1e308', areaUnit: 'ft2' }), 'us');
     expect(overflow.fieldErrors).toEqual({ area: ['1e+308 ft² is too large to work with.'] });
+    const tinyRatio = recomputeWorkbench(metricForm({ distributionRatio: '5e-324' }), 'metric');
+    expect(tinyRatio.fieldErrors.distributionRatio?.[0]).toMatch(/average thickness too large to work with/);
     expect(JSON.stringify(huge)).not.toMatch(/NaN|Infinity/);
   });
 

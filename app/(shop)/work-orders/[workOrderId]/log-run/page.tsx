@@ -28,7 +28,7 @@ export default async function LogRunPage({ params }: { params: Promise<{ workOrd
         title="Log a plating run"
         description={`${wo.part_number} · ${wo.finish_code} · minimum ${formatStoredQuantity(wo.min_thickness_um, 'thickness', user.unitSystem)}`}
       />
-      <Caution kind={['electrical', 'hydrogen']} compact />
+      <Caution kind={['electrical', 'hydrogen']} />
       {!open ? (
         <EmptyState title="Runs cannot be logged now" description={wo.state === 'accepted' ? 'Receive the parts first.' : 'Plating is finished on this order.'} action={<Link href={`/work-orders/${wo.id}`}>Back to the order</Link>} />
       ) : tanks.length === 0 ? (

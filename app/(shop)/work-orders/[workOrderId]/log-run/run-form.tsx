@@ -23,6 +23,8 @@ function newKey(): string {
 function usePrediction(v: Record<string, string>, finish: RunFinish, tank: RunTank | undefined) {
   return useMemo(() => {
     if (!tank) return { ok: false, error: 'Choose the tank.' } as const;
+    const typed = v.mode === 'meter' ? v.meterStartAh && v.meterStopAh : v.currentA;
+    if (!typed || !v.minutesPerLoad) return { ok: false, error: 'Enter the current and the minutes to see the predicted thickness before saving.' } as const;
     try {
       const loads = num(v.loads);
       const partsPerLoad = num(v.partsPerLoad);

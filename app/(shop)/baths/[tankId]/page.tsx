@@ -1,0 +1,94 @@
+import type { Metadata } from 'next';
+import Link from 'next/link';
+import { notFound } from 'next/navigation';
+import { BathCaution } from '@/components/bath/bath-caution';
+import { formatBathValue } from '@/components/bath/bath-value';
+import { LinkButton } from '@/components/ui/button';
+import { Card } from '@/components/ui/card';
+import { EmptyState } from '@/components/ui/empty-state';
+import { PageHeader } from '@/components/ui/page-header';
+import { can, requirePageUser } from '@/lib/auth/current-user';
+import { ALERT_KIND_LABEL, findAlerts } from '@/lib/bath/alerts';
+import { doseRows } from '@/lib/bath/dose-rows';
+import { findAdditiveDoses, findHullCellPanels, findRecentAdditions, findRecentAnalyses } from '@/lib/bath/history';
+import { findLimitChanges } from '@/lib/bath/limits';
+import { findAnalyteStatus, getTank } from '@/lib/bath/queries';
+import { readSupply } from '@/lib/bath/supplies';
+import { getTemplate } from '@/lib/bath/templates';
+import { AnalytesTable } from './analytes-table';
+import { SetupAnalytesForm } from './setup-form';
+import { AdditionsTable, AnalysesTable } from './tank-records';
+import { TankSide } from './tank-side';
+
+export const metadata: Metadata = { title: 'Tank' };
+
+export default async function BathTankPage({ params }: { params: Promise<{ tankId: string }> }) {
+  const { tankId } = await params;
+  const user = await requirePageUser('bath.read', `/baths/${tankId}`);
+  const tank = await getTank({ id: tankId });
+  if (!tank) notFound();
+  const template = getTemplate(tank.template_id);
+  const [analytes, analyses, additions, doses, panels, alerts] = await Promise.all([
+    findAnalyteStatus([tank.id]),
+    findRecentAnalyses(tank.id, { limit: 40 }),
+    findRecentAdditions(tank.id, 20),
+    tank.has_ah_meter ? findAdditiveDoses(tank.id) : Promise.resolve({ doses: [], lastReading: null }),
+    findHullCellPanels(tank.id, 6),
+    findAlerts({ open: true, tankId: tank.id }),
+  ]);
+  const changes = await findLimitChanges(analytes.map((a) => a.id));
+  const system = user.unitSystem;
+  return (
+    <div className="flex flex-col gap-6">
+      <PageHeader
+        eyebrow={<Link href="/baths" className="text-action underline">Baths</Link>}
+        title={`${tank.code} · ${tank.name}`}
+        description={`${template?.name ?? tank.template_id} · ${formatBathValue(tank.volume_l, 'L', system)} · ${tank.line_name}${tank.rectifier_max_a ? ` · rectifier ${tank.rectifier_max_a} A` : ''} · ${tank.anode_type} anodes`}
+        actions={
+          <>
+            {can(user, 'bath.log') ? <LinkButton href={`/floor/tanks/${tank.code}`}>Log at the tank</LinkButton> : null}
+            {can(user, 'bath.log') ? <LinkButton href={`/floor/tanks/${tank.code}/label`} variant="secondary">QR label</LinkButton> : null}
+          </>
+        }
+      />
+      <BathCaution hazards={template?.hazards ?? []} compact />
+      {alerts.length > 0 ? (
+        <Card title={`Open alerts (${alerts.length})`} actions={<Link href="/baths/alerts" className="text-sm text-action underline">All alerts</Link>}>
+          <ul className="flex flex-col gap-1 text-sm">
+            {alerts.map((a) => (
+              <li key={a.id}>
+                <strong>{ALERT_KIND_LABEL[a.kind]}</strong>
+                {a.state === 'escalated' ? ' (escalated)' : ''}: {a.message}
+              </li>
+            ))}
+          </ul>
+        </Card>
+      ) : null}
+      <Card title="Analytes" padding="sm">
+        {analytes.length === 0 ? (
+          <EmptyState
+            title="No analytes set up"
+            description="Copy the analytes, limits and methods from the tank's bath template."
+            action={can(user, 'bath.limits') ? <SetupAnalytesForm tankId={tank.id} /> : null}
+          />
+        ) : (
+          <AnalytesTable tankId={tank.id} analytes={analytes} system={system} canEditLimits={can(user, 'bath.limits')} />
+        )}
+      </Card>
+      <Card title="Recent analyses" description="Corrections are new entries: the corrected one stays, struck through." padding="sm">
+        <AnalysesTable rows={analyses} tankCode={tank.code} system={system} canCorrect={can(user, 'bath.log')} />
+      </Card>
+      <Card title="Recent additions" padding="sm">
+        <AdditionsTable rows={additions} system={system} />
+      </Card>
+      <TankSide
+        system={system}
+        doses={doseRows(doses.doses, analytes.map((a) => ({ id: a.id, supply: readSupply(a.supply) })))}
+        lastReading={doses.lastReading}
+        panels={panels}
+        changes={changes}
+        analyteNames={new Map(analytes.map((a) => [a.id, a.name]))}
+      />
+    </div>
+  );
+}
