@@ -73,3 +73,11 @@ export function verdictSentence(verdict: Pick<Verdict, 'status' | 'limit'>, limi
   if (verdict.status === 'near_limit') return `Close to the ${words}${shown}.`;
   return `${verdict.limit.startsWith('lower') ? 'Below' : 'Above'} the ${words}${shown}.`;
 }
+
+const WHEN = new Intl.DateTimeFormat('en-GB', { dateStyle: 'short', timeStyle: 'short', timeZone: 'UTC' });
+
+/** A time as "01/12/2026, 07:45 UTC": the same text on the server and in the browser. */
+export function formatWhen(at: Date | string): string {
+  const d = typeof at === 'string' ? new Date(at) : at;
+  return Number.isNaN(d.getTime()) ? '—' : `${WHEN.format(d)} UTC`;
+}

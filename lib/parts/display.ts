@@ -1,17 +1,17 @@
 // Part figures in the user's units, for pages and the form's previews. Pure and browser-safe.
-import { convert, formatNumber, formatStoredQuantity, type UnitSystem } from '@/lib/plating';
-import { lengthToMm, type LengthUnit } from './shapes';
+import { lengthFromMm, unitSymbol, volumeFromCm3 } from '@/lib/estimating/display-units';
+import { formatNumber, formatStoredQuantity, type UnitSystem } from '@/lib/plating';
+import type { LengthUnit } from './shapes';
 
 export const formatArea = (dm2: number, system: UnitSystem) => formatStoredQuantity(dm2, 'area', system);
 export const formatWeight = (g: number, system: UnitSystem) => formatStoredQuantity(g, 'mass', system);
 
 export function formatLength(mm: number, unit: LengthUnit): string {
-  return unit === 'mm' ? `${formatNumber(mm, 4)} mm` : `${formatNumber(convert(mm, 'mm', 'mil') / 1000, 4)} in`;
+  return `${formatNumber(lengthFromMm(mm, unit), 4)} ${unit}`;
 }
 
-/** Solid volume: cm³ in metric, in³ in US units (1 in³ = (25.4 mm)³). */
+/** Solid volume: cm³ in metric, in³ in US units. */
 export function formatVolume(cm3: number, system: UnitSystem): string {
-  if (system === 'metric') return `${formatNumber(cm3, 3)} cm³`;
-  const cm3PerIn3 = lengthToMm(1, 'in') ** 3 / 1000;
-  return `${formatNumber(cm3 / cm3PerIn3, 3)} in³`;
+  const v = volumeFromCm3(cm3, system);
+  return `${formatNumber(v.value, 3)} ${unitSymbol(v.unit)}`;
 }

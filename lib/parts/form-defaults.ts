@@ -1,5 +1,6 @@
 // The part form's starting values: a new part, or a saved one shown in the user's units with the
 // area method it was measured by. Pure.
+import { LENGTH_UNIT } from '@/lib/estimating/display-units';
 import { plainNumber } from '@/lib/records/fields';
 import { displayUnit, fromStorage, type SubstrateId, type UnitSystem } from '@/lib/plating';
 import { isShapeKind, type LengthUnit, type ShapeKind } from './shapes';
@@ -28,7 +29,7 @@ const shown = (n: number) => plainNumber(n);
 export function partFormDefaults(part: Saved | null, system: UnitSystem, customerId = '') {
   const areaUnit = displayUnit('area', system);
   const massUnit = displayUnit('mass', system);
-  const lengthUnit: LengthUnit = system === 'us' ? 'in' : 'mm';
+  const lengthUnit: LengthUnit = LENGTH_UNIT[system];
   const calc = (part?.calculation_input ?? null) as { method?: string; kind?: string; unit?: string; dims?: Record<string, string>; flags?: Record<string, boolean> } | null;
   const shapeKind: ShapeKind = calc?.method === 'shape' && calc.kind && isShapeKind(calc.kind) ? calc.kind : 'block';
   const calcUnit: LengthUnit = calc?.unit === 'in' || calc?.unit === 'mm' ? calc.unit : lengthUnit;

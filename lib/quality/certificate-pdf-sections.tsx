@@ -1,14 +1,14 @@
 // Sections of the certificate PDF: the readings table, the bake record and the bath analyses.
-import { Text, View } from '@react-pdf/renderer';
 import type { CertificateContent } from './certificate-content';
-import { Fact, pdfStyles, um } from './certificate-pdf-style';
+import { Fact, type Kit, pdfStyles, um } from './certificate-pdf-style';
 
 /** Readings printed in full up to this many; the rest stay in the shop's record. */
 export const PRINTED_READINGS = 40;
 
 const STATUS_WORD: Record<string, string> = { pass: 'conforms', below_minimum: 'below minimum', above_maximum: 'above maximum' };
 
-export function ReadingsTable({ readings }: { readings: CertificateContent['thickness']['readings'] }) {
+export function ReadingsTable({ k, readings }: { k: Kit; readings: CertificateContent['thickness']['readings'] }) {
+  const { Text, View } = k;
   if (readings.length === 0) return null;
   const shown = readings.slice(0, PRINTED_READINGS);
   const col = [{ width: 44 }, { flex: 1 }, { width: 54 }, { width: 150 }, { width: 80 }];
@@ -40,7 +40,8 @@ export function ReadingsTable({ readings }: { readings: CertificateContent['thic
   );
 }
 
-export function BakeSection({ c, at }: { c: CertificateContent; at: (t: string) => string }) {
+export function BakeSection({ k, c, at }: { k: Kit; c: CertificateContent; at: (t: string) => string }) {
+  const { Text, View } = k;
   const b = c.bake;
   return (
     <View style={pdfStyles.section} wrap={false}>
@@ -50,14 +51,14 @@ export function BakeSection({ c, at }: { c: CertificateContent; at: (t: string) 
       ) : (
         <>
           <View style={pdfStyles.grid}>
-            <Fact label="Oven" value={b.oven} />
-            <Fact label="Plating ended" value={at(b.platingEndedAt)} />
-            <Fact label="Bake started" value={at(b.bakeStartedAt)} />
-            <Fact label="Start by" value={at(b.deadlineAt)} />
-            <Fact label="Temperature" value={b.tempMinC === b.tempMaxC ? `${b.tempMinC} °C` : `${b.tempMinC}–${b.tempMaxC} °C`} />
-            <Fact label="Required" value={`${b.requiredTempC[0]}–${b.requiredTempC[1]} °C`} />
-            <Fact label="Duration" value={`${b.durationH} h`} />
-            <Fact label="Required time" value={b.requiredMinHours === null ? "per customer's specification" : `at least ${b.requiredMinHours} h`} />
+            <Fact k={k} label="Oven" value={b.oven} />
+            <Fact k={k} label="Plating ended" value={at(b.platingEndedAt)} />
+            <Fact k={k} label="Bake started" value={at(b.bakeStartedAt)} />
+            <Fact k={k} label="Start by" value={at(b.deadlineAt)} />
+            <Fact k={k} label="Temperature" value={b.tempMinC === b.tempMaxC ? `${b.tempMinC} °C` : `${b.tempMinC}–${b.tempMaxC} °C`} />
+            <Fact k={k} label="Required" value={`${b.requiredTempC[0]}–${b.requiredTempC[1]} °C`} />
+            <Fact k={k} label="Duration" value={`${b.durationH} h`} />
+            <Fact k={k} label="Required time" value={b.requiredMinHours === null ? "per customer's specification" : `at least ${b.requiredMinHours} h`} />
           </View>
           <Text style={{ marginTop: 2 }}>
             {b.verdict === 'pass' ? 'The bake met the requirement.' : `The bake did not meet the requirement: ${b.reasons.join(' ')}`}
@@ -72,7 +73,8 @@ export function BakeSection({ c, at }: { c: CertificateContent; at: (t: string) 
 
 const BATH_STATUS: Record<string, string> = { in_range: 'in range', near_limit: 'near a limit', out_of_range: 'out of range' };
 
-export function BathSection({ c, at }: { c: CertificateContent; at: (t: string) => string }) {
+export function BathSection({ k, c, at }: { k: Kit; c: CertificateContent; at: (t: string) => string }) {
+  const { Text, View } = k;
   const runs = c.runs.map((r) => `${r.tankCode} ${r.tankName} (ended ${at(r.endedAt)}, ${r.ampHours} A·h)`).join('; ');
   return (
     <View style={pdfStyles.section} wrap={false}>

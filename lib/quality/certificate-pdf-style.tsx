@@ -1,13 +1,17 @@
 // Colours, text styles and small pieces shared by the certificate PDF's page and sections.
-import { StyleSheet, Text, View } from '@react-pdf/renderer';
+// @react-pdf is ES-module only and the seed and bench scripts (tsx, CommonJS) reach it only through
+// import(), so the primitives arrive as a `kit` (the loaded module) instead of static imports.
+import type { Styles } from '@react-pdf/renderer';
 import { fromStorage } from '@/lib/plating';
+
+export type Kit = typeof import('@react-pdf/renderer');
 
 export const TEAL = '#0f5f5c';
 export const COPPER = '#a4582a';
 export const INK = '#1f2426';
 export const MUTED = '#5b6367';
 
-export const pdfStyles = StyleSheet.create({
+export const pdfStyles = {
   page: { fontFamily: 'Plex Sans', fontSize: 9, color: INK, paddingTop: 36, paddingBottom: 48, paddingHorizontal: 40, lineHeight: 1.35 },
   shop: { fontSize: 14, fontWeight: 600, lineHeight: 1.25 },
   muted: { color: MUTED },
@@ -25,12 +29,13 @@ export const pdfStyles = StyleSheet.create({
   head: { flexDirection: 'row', borderBottomWidth: 1, borderBottomColor: INK, paddingVertical: 2, fontWeight: 600 },
   footer: { position: 'absolute', bottom: 22, left: 40, right: 40, flexDirection: 'row', justifyContent: 'space-between', fontSize: 7.5, color: MUTED },
   signature: { marginTop: 14, flexDirection: 'row', borderTopWidth: 1, borderTopColor: INK, paddingTop: 6 },
-});
+} satisfies Styles;
 
 export const um = (v: number | null | undefined) =>
   v === null || v === undefined || !Number.isFinite(v) ? '—' : `${v.toFixed(2)} µm (${fromStorage(v, 'mil').toFixed(3)} mil)`;
 
-export function Fact({ label, value }: { label: string; value: string }) {
+export function Fact({ k, label, value }: { k: Kit; label: string; value: string }) {
+  const { Text, View } = k;
   return (
     <View style={pdfStyles.cell}>
       <Text style={pdfStyles.label}>{label}</Text>

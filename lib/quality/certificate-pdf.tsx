@@ -1,13 +1,13 @@
 // The certificate of conformance as a PDF, drawn from its frozen content. Our own layout: a teal
 // rule under the shop's name, facts in two columns, then thickness, bake, baths and signature.
 // Fonts are the IBM Plex .woff files in fonts/ (woff2 renders blank in @react-pdf), unpacked once.
+import { spawnSync } from 'node:child_process';
 import { readFileSync } from 'node:fs';
 import path from 'node:path';
-import { Document, Font, Page, Text, View, renderToBuffer } from '@react-pdf/renderer';
 import type { CertificateContent } from './certificate-content';
 import { formatShopTime } from './shop-time';
 import { BathSection, BakeSection, ReadingsTable } from './certificate-pdf-sections';
-import { Fact, pdfStyles, um } from './certificate-pdf-style';
+import { Fact, type Kit, pdfStyles, um } from './certificate-pdf-style';
 import { woffToSfnt } from './woff-to-sfnt';
 
 let fontsReady = false;
@@ -18,7 +18,7 @@ function fontSource(file: string): string {
   return `data:font/ttf;base64,${sfnt.toString('base64')}`;
 }
 
-function registerFonts(): void {
+function registerFonts({ Font }: Kit): void {
   if (fontsReady) return;
   Font.register({
     family: 'Plex Sans',
@@ -33,7 +33,8 @@ function registerFonts(): void {
   fontsReady = true;
 }
 
-export function CertificateDocument({ c }: { c: CertificateContent }) {
+export function CertificateDocument({ k, c }: { k: Kit; c: CertificateContent }) {
+  const { Document, Page, Text, View } = k;
   const at = (t: string) => formatShopTime(t, c.timeZone);
   const t = c.thickness;
   const limits = `minimum ${um(c.finish.minThicknessUm)} on significant surfaces${c.finish.maxThicknessUm ? `, maximum ${um(c.finish.maxThicknessUm)}` : ''}`;
@@ -52,16 +53,16 @@ export function CertificateDocument({ c }: { c: CertificateContent }) {
         </View>
         <View style={pdfStyles.rule} />
         <View style={pdfStyles.grid}>
-          <Fact label="Customer" value={`${c.customer.name} (${c.customer.code})`} />
-          <Fact label="Purchase order" value={c.order.poNumber} />
-          <Fact label="Part number" value={c.part.number} />
-          <Fact label="Revision" value={c.part.revision} />
-          <Fact label="Description" value={c.part.description} />
-          <Fact label="Quantity" value={`${c.order.quantity} pieces`} />
-          <Fact label="Work order" value={c.order.number} />
-          <Fact label="Substrate" value={c.part.substrate} />
-          <Fact label="Finish" value={`${c.finish.name} (${c.finish.code})`} />
-          <Fact label="Specification" value={c.finish.specText} />
+          <Fact k={k} label="Customer" value={`${c.customer.name} (${c.customer.code})`} />
+          <Fact k={k} label="Purchase order" value={c.order.poNumber} />
+          <Fact k={k} label="Part number" value={c.part.number} />
+          <Fact k={k} label="Revision" value={c.part.revision} />
+          <Fact k={k} label="Description" value={c.part.description} />
+          <Fact k={k} label="Quantity" value={`${c.order.quantity} pieces`} />
+          <Fact k={k} label="Work order" value={c.order.number} />
+          <Fact k={k} label="Substrate" value={c.part.substrate} />
+          <Fact k={k} label="Finish" value={`${c.finish.name} (${c.finish.code})`} />
+          <Fact k={k} label="Specification" value={c.finish.specText} />
         </View>
 
         <View style={pdfStyles.section}>
@@ -72,18 +73,18 @@ export function CertificateDocument({ c }: { c: CertificateContent }) {
             {t.codeLetter ? ` (code letter ${t.codeLetter})` : ' (every part)'} per {t.planName}. Method: {t.methods.join(', ') || '—'}.
           </Text>
           <View style={[pdfStyles.grid, { marginTop: 3 }]}>
-            <Fact label="Readings" value={String(t.count)} />
-            <Fact label="Mean" value={um(t.meanUm)} />
-            <Fact label="Minimum" value={um(t.minUm)} />
-            <Fact label="Maximum" value={um(t.maxUm)} />
-            <Fact label="Std deviation" value={t.stdDevUm === null ? '— (one reading)' : um(t.stdDevUm)} />
-            <Fact label="Verdict" value={t.failingAcceptedByDisposition ? `${t.failingAcceptedByDisposition} failing ${t.failingAcceptedByDisposition === 1 ? 'reading' : 'readings'} accepted by disposition` : 'All readings conform'} />
+            <Fact k={k} label="Readings" value={String(t.count)} />
+            <Fact k={k} label="Mean" value={um(t.meanUm)} />
+            <Fact k={k} label="Minimum" value={um(t.minUm)} />
+            <Fact k={k} label="Maximum" value={um(t.maxUm)} />
+            <Fact k={k} label="Std deviation" value={t.stdDevUm === null ? '— (one reading)' : um(t.stdDevUm)} />
+            <Fact k={k} label="Verdict" value={t.failingAcceptedByDisposition ? `${t.failingAcceptedByDisposition} failing ${t.failingAcceptedByDisposition === 1 ? 'reading' : 'readings'} accepted by disposition` : 'All readings conform'} />
           </View>
-          <ReadingsTable readings={t.readings} />
+          <ReadingsTable k={k} readings={t.readings} />
         </View>
 
-        <BakeSection c={c} at={at} />
-        <BathSection c={c} at={at} />
+        <BakeSection k={k} c={c} at={at} />
+        <BathSection k={k} c={c} at={at} />
 
         {c.nonconformances.length ? (
           <View style={pdfStyles.section} wrap={false}>
@@ -101,8 +102,8 @@ export function CertificateDocument({ c }: { c: CertificateContent }) {
         <View style={pdfStyles.section} wrap={false}>
           <Text>{c.statement}</Text>
           <View style={pdfStyles.signature}>
-            <Fact label="Signed" value={`${c.signedBy.name}, ${c.signedBy.role}`} />
-            <Fact label="Date" value={at(c.signedAt)} />
+            <Fact k={k} label="Signed" value={`${c.signedBy.name}, ${c.signedBy.role}`} />
+            <Fact k={k} label="Date" value={at(c.signedAt)} />
           </View>
         </View>
 
@@ -117,7 +118,21 @@ export function CertificateDocument({ c }: { c: CertificateContent }) {
   );
 }
 
+// Scripts started with --conditions=react-server (the seed) get React's server build, which
+// @react-pdf's reconciler cannot use; they render in a child process without that condition.
+const UNDER_REACT_SERVER = process.execArgv.some((a) => a.includes('react-server'));
+
+function renderInChildProcess(content: CertificateContent): Buffer {
+  const cli = path.join(process.cwd(), 'lib', 'quality', 'certificate-pdf-cli.ts');
+  const execArgv = process.execArgv.filter((a) => !a.includes('react-server') && a !== '--conditions');
+  const r = spawnSync(process.execPath, [...execArgv, cli], { input: JSON.stringify(content), maxBuffer: 64 * 1024 * 1024, encoding: 'utf8' });
+  if (r.status !== 0) throw new Error(`The certificate PDF could not be rendered: ${r.stderr || r.error?.message || 'unknown error'}`);
+  return Buffer.from(r.stdout, 'base64');
+}
+
 export async function renderCertificatePdf(content: CertificateContent): Promise<Buffer> {
-  registerFonts();
-  return renderToBuffer(<CertificateDocument c={content} />);
+  if (UNDER_REACT_SERVER) return renderInChildProcess(content);
+  const k: Kit = await import('@react-pdf/renderer');
+  registerFonts(k);
+  return k.renderToBuffer(<CertificateDocument k={k} c={content} />);
 }

@@ -16,7 +16,7 @@ export default async function PortalLayout({ children }: { children: ReactNode }
       <AppNav
         variant="top"
         label="Customer area"
-        items={navFor(user.role, CUSTOMER_NAV, { demoMode: false })}
+        items={navFor(user.role, CUSTOMER_NAV, { demoMode: false }).map(({ href, label }) => ({ href, label }))}
         brand={<Brand href="/portal" subtitle="Customer area" />}
         footer={<UserMenu user={user} accountHref="/portal/account" />}
         className="border-b border-surface-line bg-surface"

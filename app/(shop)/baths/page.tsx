@@ -6,12 +6,11 @@ import { LinkButton } from '@/components/ui/button';
 import { EmptyState } from '@/components/ui/empty-state';
 import { PageHeader } from '@/components/ui/page-header';
 import { can, requirePageUser } from '@/lib/auth/current-user';
+import { formatWhen } from '@/lib/bath/display';
 import { countOpenAlerts } from '@/lib/bath/alerts';
 import { findTankSummaries } from '@/lib/bath/queries';
 
 export const metadata: Metadata = { title: 'Baths' };
-
-const when = new Intl.DateTimeFormat('en-GB', { dateStyle: 'medium', timeStyle: 'short', timeZone: 'UTC' });
 
 export default async function BathsBoardPage() {
   const user = await requirePageUser('bath.read', '/baths');
@@ -54,7 +53,7 @@ export default async function BathsBoardPage() {
                       {t.overdue > 0 ? <Badge tone="outline">{t.overdue} {t.overdue === 1 ? 'analysis' : 'analyses'} due</Badge> : null}
                       {t.analyteCount === 0 ? <Badge tone="outline">No analytes set up</Badge> : null}
                     </span>
-                    <span className="text-xs text-ink-muted">{t.lastAnalysedAt ? `Last analysis ${when.format(t.lastAnalysedAt)} UTC` : 'Not analysed yet'}</span>
+                    <span className="text-xs text-ink-muted">{t.lastAnalysedAt ? `Last analysis ${formatWhen(t.lastAnalysedAt)}` : 'Not analysed yet'}</span>
                   </Link>
                 </li>
               ))}

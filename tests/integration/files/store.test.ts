@@ -4,9 +4,8 @@ import { db } from '@/db';
 import { readFileFor } from '@/lib/files/access';
 import { FILE_KINDS } from '@/lib/files/sniff';
 import { readFile, storeFile } from '@/lib/files/store';
-import { AppError } from '@/lib/errors';
 import { binaryStlChunks, cubeMesh, makeBinaryStl } from '@/lib/plating';
-import { customerIdByCode, inRolledBackTransaction, sessionUserByEmail } from '../records/helpers';
+import { customerIdByCode, inRolledBackTransaction, refusalOf, sessionUserByEmail } from '../records/helpers';
 
 afterAll(() => db.destroy());
 
@@ -23,15 +22,6 @@ function streamOf(chunks: Iterable<Uint8Array>): ReadableStream<Uint8Array> {
   });
 }
 
-async function refusal(p: Promise<unknown>): Promise<string> {
-  try {
-    await p;
-    return 'stored';
-  } catch (e) {
-    if (!(e instanceof AppError)) throw e;
-    return `${e.code}: ${e.message}`;
-  }
-}
 
 describe('storeFile', () => {
   it('keeps the bytes with their SHA-256 and sniffed type', async () => {
@@ -67,18 +57,18 @@ describe('storeFile', () => {
     await inRolledBackTransaction(async (trx) => {
       const before = (await trx.selectFrom('files').select((eb) => eb.fn.countAll<number>().as('n')).executeTakeFirstOrThrow()).n;
       const big = streamOf(Array.from({ length: 40 }, () => new Uint8Array(1000).fill(65)));
-      expect(await refusal(storeFile({ name: 'big.txt', stream: big, maxBytes: 10_000, allowed: FILE_KINDS.csv, uploadedBy: null }, trx))).toBe(
+      expect(await refusalOf(storeFile({ name: 'big.txt', stream: big, maxBytes: 10_000, allowed: FILE_KINDS.csv, uploadedBy: null }, trx))).toBe(
         'TOO_LARGE: "big.txt" is larger than the 9.8 KB limit for this upload.',
       );
-      expect(await refusal(storeFile({ name: 'drawing.png', bytes: PDF, allowed: FILE_KINDS.drawing, uploadedBy: null }, trx))).toMatch(
+      expect(await refusalOf(storeFile({ name: 'drawing.png', bytes: PDF, allowed: FILE_KINDS.drawing, uploadedBy: null }, trx))).toMatch(
         /^BAD_INPUT: "drawing.png" is named .png but its content is a PDF document/,
       );
-      expect(await refusal(storeFile({ name: 'nothing.pdf', bytes: new Uint8Array(), allowed: FILE_KINDS.drawing, uploadedBy: null }, trx))).toBe(
+      expect(await refusalOf(storeFile({ name: 'nothing.pdf', bytes: new Uint8Array(), allowed: FILE_KINDS.drawing, uploadedBy: null }, trx))).toBe(
         'BAD_INPUT: "nothing.pdf" is empty.',
       );
       const stl = makeBinaryStl(cubeMesh(5));
       const cut = stl.subarray(0, stl.length - 10);
-      expect(await refusal(storeFile({ name: 'cut.stl', bytes: cut, allowed: FILE_KINDS.stl, uploadedBy: null }, trx))).toMatch(/^BAD_INPUT: "cut.stl" is not/);
+      expect(await refusalOf(storeFile({ name: 'cut.stl', bytes: cut, allowed: FILE_KINDS.stl, uploadedBy: null }, trx))).toMatch(/^BAD_INPUT: "cut.stl" is not/);
       const after = (await trx.selectFrom('files').select((eb) => eb.fn.countAll<number>().as('n')).executeTakeFirstOrThrow()).n;
       expect(after).toBe(before);
     });

@@ -2,8 +2,7 @@ import { afterAll, describe, expect, it } from 'vitest';
 import { db } from '@/db';
 import { addContact, createCustomer, updateCustomer } from '@/lib/customers/mutations';
 import { customerSchema } from '@/lib/customers/schemas';
-import { AppError } from '@/lib/errors';
-import { inRolledBackTransaction, sessionUserByEmail, uniqueSuffix } from './helpers';
+import { inRolledBackTransaction, refusalOf, sessionUserByEmail, uniqueSuffix } from './helpers';
 
 afterAll(() => db.destroy());
 
@@ -19,15 +18,6 @@ const form = (code: string) =>
     taxRatePercent: '8.88',
   });
 
-async function refusal(p: Promise<unknown>): Promise<string> {
-  try {
-    await p;
-    return 'done';
-  } catch (e) {
-    if (!(e instanceof AppError)) throw e;
-    return `${e.code}: ${e.message}${e.fieldErrors ? ` ${JSON.stringify(e.fieldErrors)}` : ''}`;
-  }
-}
 
 const count = (trx: typeof db, table: 'customers' | 'customer_contacts' | 'audit_log') =>
   trx.selectFrom(table).select((eb) => eb.fn.countAll<number>().as('n')).executeTakeFirstOrThrow().then((r) => r.n);
@@ -64,11 +54,11 @@ describe('customers', () => {
     await inRolledBackTransaction(async (trx) => {
       const [plater, owner] = await Promise.all([sessionUserByEmail('plater@kestrel-plating.test'), sessionUserByEmail('owner@kestrel-plating.test')]);
       const before = await Promise.all([count(trx, 'customers'), count(trx, 'audit_log')]);
-      expect(await refusal(createCustomer(plater, { ...valid(), code: 'PLATERTRY' }, trx))).toBe('FORBIDDEN: You are not allowed to do this.');
-      expect(await refusal(createCustomer(owner, { ...valid(), code: 'NGF' }, trx))).toBe(
+      expect(await refusalOf(createCustomer(plater, { ...valid(), code: 'PLATERTRY' }, trx))).toBe('FORBIDDEN: You are not allowed to do this.');
+      expect(await refusalOf(createCustomer(owner, { ...valid(), code: 'NGF' }, trx))).toBe(
         'CONFLICT: Check the highlighted field. {"code":["Another customer already uses the code NGF."]}',
       );
-      expect(await refusal(updateCustomer(owner, { ...valid(), code: 'ZZZ', customerId: '00000000-0000-4000-8000-000000000000' }, trx))).toBe(
+      expect(await refusalOf(updateCustomer(owner, { ...valid(), code: 'ZZZ', customerId: '00000000-0000-4000-8000-000000000000' }, trx))).toBe(
         'NOT_FOUND: That customer does not exist.',
       );
       expect(await Promise.all([count(trx, 'customers'), count(trx, 'audit_log')])).toEqual(before);
@@ -83,8 +73,8 @@ describe('customers', () => {
       const { invited } = await addContact(owner, contact, trx);
       expect(invited).toBe(false);
       const before = await count(trx, 'customer_contacts');
-      expect(await refusal(addContact(owner, { ...contact, name: 'Pat again' }, trx))).toMatch(/already has a contact with that e-mail/);
-      expect(await refusal(addContact(owner, { ...contact, customerId: '00000000-0000-4000-8000-000000000000' }, trx))).toBe('NOT_FOUND: That customer does not exist.');
+      expect(await refusalOf(addContact(owner, { ...contact, name: 'Pat again' }, trx))).toMatch(/already has a contact with that e-mail/);
+      expect(await refusalOf(addContact(owner, { ...contact, customerId: '00000000-0000-4000-8000-000000000000' }, trx))).toBe('NOT_FOUND: That customer does not exist.');
       expect(await count(trx, 'customer_contacts')).toBe(before);
     });
   });

@@ -1,24 +1,14 @@
 import { afterAll, describe, expect, it } from 'vitest';
 import { db } from '@/db';
-import { AppError } from '@/lib/errors';
 import { saveFinish } from '@/lib/finishes/mutations';
 import { finishSchema } from '@/lib/finishes/schemas';
 import { saveRateSet } from '@/lib/rates/mutations';
 import { databaseToday, findRateSets, getRateSetInForce } from '@/lib/rates/queries';
 import { rateSetSchema } from '@/lib/rates/schemas';
-import { inRolledBackTransaction, sessionUserByEmail, uniqueSuffix } from './helpers';
+import { inRolledBackTransaction, refusalOf, sessionUserByEmail, uniqueSuffix } from './helpers';
 
 afterAll(() => db.destroy());
 
-async function refusal(p: Promise<unknown>): Promise<string> {
-  try {
-    await p;
-    return 'saved';
-  } catch (e) {
-    if (!(e instanceof AppError)) throw e;
-    return `${e.code}: ${JSON.stringify(e.fieldErrors ?? e.message)}`;
-  }
-}
 
 const FINISH_FORM = {
   finishId: '',
@@ -67,8 +57,8 @@ describe('finishes', () => {
   it('refuses a plater and a taken code, and asks for the bake figures when a bake is required', async () => {
     await inRolledBackTransaction(async (trx) => {
       const [plater, owner] = await Promise.all([sessionUserByEmail('plater@kestrel-plating.test'), sessionUserByEmail('owner@kestrel-plating.test')]);
-      expect(await refusal(saveFinish(plater, finishSchema.parse({ ...FINISH_FORM, code: 'NEW-ONE' }), trx))).toBe('FORBIDDEN: "You are not allowed to do this."');
-      expect(await refusal(saveFinish(owner, finishSchema.parse({ ...FINISH_FORM, code: 'AG-B700-5' }), trx))).toBe('CONFLICT: {"code":["Another finish already uses the code AG-B700-5."]}');
+      expect(await refusalOf(saveFinish(plater, finishSchema.parse({ ...FINISH_FORM, code: 'NEW-ONE' }), trx))).toBe('FORBIDDEN: You are not allowed to do this.');
+      expect(await refusalOf(saveFinish(owner, finishSchema.parse({ ...FINISH_FORM, code: 'AG-B700-5' }), trx))).toBe('CONFLICT: Check the highlighted field. {"code":["Another finish already uses the code AG-B700-5."]}');
       const r = finishSchema.safeParse({ ...FINISH_FORM, code: 'X1', bakeTemp: '', bakeHours: '', maskingPerPiece: '0.355', efficiencyPercent: '120' });
       expect(r.error?.issues.map((i) => i.path[0]).sort()).toEqual(['bakeHours', 'bakeTemp', 'efficiencyPercent', 'maskingPerPiece']);
       expect(await trx.selectFrom('finishes').select('id').where('code', '=', 'NEW-ONE').executeTakeFirst()).toBeUndefined();
@@ -119,8 +109,8 @@ describe('rate sets', () => {
       expect((await getRateSetInForce(later, trx))?.id).toBe(rateSetId);
       const inForce = sets.find((s) => s.status === 'in force')!;
       expect(inForce.effective_day <= today).toBe(true);
-      expect(await refusal(saveRateSet(owner, rateSetSchema.parse({ ...RATES, rateSetId: inForce.id, effectiveFrom: addDays(today, 1) }), trx))).toBe(
-        'CONFLICT: "This rate set has taken effect and is kept as it was. Add a new set with a later date instead."',
+      expect(await refusalOf(saveRateSet(owner, rateSetSchema.parse({ ...RATES, rateSetId: inForce.id, effectiveFrom: addDays(today, 1) }), trx))).toBe(
+        'CONFLICT: This rate set has taken effect and is kept as it was. Add a new set with a later date instead.',
       );
     });
   });
@@ -130,13 +120,13 @@ describe('rate sets', () => {
       const [estimator, owner] = await Promise.all([sessionUserByEmail('estimator@kestrel-plating.test'), sessionUserByEmail('owner@kestrel-plating.test')]);
       const today = await databaseToday(trx);
       const before = (await findRateSets(today, trx)).length;
-      expect(await refusal(saveRateSet(estimator, rateSetSchema.parse({ ...RATES, effectiveFrom: addDays(today, 30) }), trx))).toBe('FORBIDDEN: "You are not allowed to do this."');
-      expect(await refusal(saveRateSet(owner, rateSetSchema.parse({ ...RATES, effectiveFrom: addDays(today, -1) }), trx))).toMatch(/^BAD_INPUT: \{"effectiveFrom":\["Rates cannot take effect in the past/);
+      expect(await refusalOf(saveRateSet(estimator, rateSetSchema.parse({ ...RATES, effectiveFrom: addDays(today, 30) }), trx))).toBe('FORBIDDEN: You are not allowed to do this.');
+      expect(await refusalOf(saveRateSet(owner, rateSetSchema.parse({ ...RATES, effectiveFrom: addDays(today, -1) }), trx))).toMatch(/^BAD_INPUT: Check the highlighted field. \{"effectiveFrom":\["Rates cannot take effect in the past/);
       expect((await findRateSets(today, trx)).length).toBe(before);
       const later = addDays(today, 800);
       await saveRateSet(owner, rateSetSchema.parse({ ...RATES, effectiveFrom: later }), trx);
-      expect(await refusal(saveRateSet(owner, rateSetSchema.parse({ ...RATES, effectiveFrom: later }), trx))).toBe(
-        'CONFLICT: {"effectiveFrom":["Another rate set already takes effect on that date. Edit that one instead."]}',
+      expect(await refusalOf(saveRateSet(owner, rateSetSchema.parse({ ...RATES, effectiveFrom: later }), trx))).toBe(
+        'CONFLICT: Check the highlighted field. {"effectiveFrom":["Another rate set already takes effect on that date. Edit that one instead."]}',
       );
       expect((await findRateSets(today, trx)).length).toBe(before + 1);
     });

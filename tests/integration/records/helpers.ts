@@ -1,6 +1,7 @@
 // Runs `fn` in a transaction that is always rolled back, so a test leaves the shared database as it was.
 import type { Kysely, Transaction } from 'kysely';
 import { db, type Database } from '@/db';
+import { AppError } from '@/lib/errors';
 
 class Rollback extends Error {}
 
@@ -32,4 +33,15 @@ export async function customerIdByCode(code: string, q: Kysely<Database> = db): 
 /** A short unique suffix so rows made by one test run never collide with another's. */
 export function uniqueSuffix(): string {
   return `${Date.now().toString(36)}${Math.floor(Math.random() * 1e6).toString(36)}`.toUpperCase();
+}
+
+/** "CODE: message {fieldErrors}" for an expected refusal, "done" if nothing was refused. */
+export async function refusalOf(p: Promise<unknown>): Promise<string> {
+  try {
+    await p;
+    return 'done';
+  } catch (e) {
+    if (!(e instanceof AppError)) throw e;
+    return `${e.code}: ${e.message}${e.fieldErrors ? ` ${JSON.stringify(e.fieldErrors)}` : ''}`;
+  }
 }

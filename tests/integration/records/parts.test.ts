@@ -1,12 +1,11 @@
 import { afterAll, describe, expect, it } from 'vitest';
 import { db } from '@/db';
-import { AppError } from '@/lib/errors';
 import { FILE_KINDS } from '@/lib/files/sniff';
 import { storeFile } from '@/lib/files/store';
 import { savePart } from '@/lib/parts/mutations';
 import { partSchema } from '@/lib/parts/schemas';
 import { cubeMesh, makeBinaryStl } from '@/lib/plating';
-import { customerIdByCode, inRolledBackTransaction, sessionUserByEmail, uniqueSuffix } from './helpers';
+import { customerIdByCode, inRolledBackTransaction, refusalOf, sessionUserByEmail, uniqueSuffix } from './helpers';
 
 afterAll(() => db.destroy());
 
@@ -23,15 +22,6 @@ async function formFor(trx: Trx, extra: Record<string, string>) {
   });
 }
 
-async function refusal(p: Promise<unknown>): Promise<string> {
-  try {
-    await p;
-    return 'saved';
-  } catch (e) {
-    if (!(e instanceof AppError)) throw e;
-    return `${e.code}: ${JSON.stringify(e.fieldErrors ?? e.message)}`;
-  }
-}
 
 const counts = (trx: Trx) =>
   Promise.all(
@@ -86,14 +76,14 @@ describe('savePart', () => {
       const [plater, estimator, owner] = await Promise.all(['plater', 'estimator', 'owner'].map((r) => sessionUserByEmail(`${r}@kestrel-plating.test`)));
       const before = await counts(trx);
       const direct = { areaMethod: 'direct', area: '0.5', areaUnit: 'dm2' };
-      expect(await refusal(savePart(plater!, await formFor(trx, direct), trx))).toBe('FORBIDDEN: "You are not allowed to do this."');
+      expect(await refusalOf(savePart(plater!, await formFor(trx, direct), trx))).toBe('FORBIDDEN: You are not allowed to do this.');
       const dup = { ...(await formFor(trx, direct)), customerId: await customerIdByCode('NGF', trx), partNumber: 'NGF-HX-0816', revision: 'C' };
-      expect(await refusal(savePart(estimator!, dup, trx))).toBe('CONFLICT: {"partNumber":["This customer already has part NGF-HX-0816 revision C."]}');
+      expect(await refusalOf(savePart(estimator!, dup, trx))).toBe('CONFLICT: Check the highlighted field. {"partNumber":["This customer already has part NGF-HX-0816 revision C."]}');
       const ownersModel = await storeFile({ name: 'cube.stl', bytes: makeBinaryStl(cubeMesh(5)), allowed: FILE_KINDS.stl, uploadedBy: owner!.id }, trx);
       const afterUpload = await counts(trx);
-      expect(await refusal(savePart(estimator!, await formFor(trx, { areaMethod: 'stl', stlFileId: ownersModel.id, stlUnit: 'mm' }), trx))).toMatch(/^BAD_INPUT: \{"stlFile"/);
+      expect(await refusalOf(savePart(estimator!, await formFor(trx, { areaMethod: 'stl', stlFileId: ownersModel.id, stlUnit: 'mm' }), trx))).toMatch(/^BAD_INPUT: Check the highlighted field. \{"stlFile"/);
       const pdf = await storeFile({ name: 'd.pdf', bytes: new TextEncoder().encode('%PDF-1.4\n%%EOF\n'), allowed: FILE_KINDS.drawing, uploadedBy: estimator!.id }, trx);
-      expect(await refusal(savePart(estimator!, await formFor(trx, { areaMethod: 'stl', stlFileId: pdf.id, stlUnit: 'mm' }), trx))).toMatch(/^BAD_INPUT: \{"stlFile"/);
+      expect(await refusalOf(savePart(estimator!, await formFor(trx, { areaMethod: 'stl', stlFileId: pdf.id, stlUnit: 'mm' }), trx))).toMatch(/^BAD_INPUT: Check the highlighted field. \{"stlFile"/);
       expect(afterUpload).toEqual(before);
       expect(await counts(trx)).toEqual(before);
     });

@@ -4,10 +4,10 @@ import { VerdictBadge } from '@/components/bath/verdict-badge';
 import { Badge } from '@/components/ui/badge';
 import { Table, TBody, Td, Th, THead, Tr } from '@/components/ui/table';
 import type { AnalyteStatus } from '@/lib/bath/queries';
+import { formatWhen } from '@/lib/bath/display';
 import type { UnitSystem } from '@/lib/plating/units';
 import { LimitsForm } from './limits-form';
 
-const when = new Intl.DateTimeFormat('en-GB', { dateStyle: 'short', timeStyle: 'short', timeZone: 'UTC' });
 
 type Props = { tankId: string; analytes: AnalyteStatus[]; system: UnitSystem; canEditLimits: boolean };
 
@@ -26,7 +26,7 @@ export function AnalytesTable({ tankId, analytes, system, canEditLimits }: Props
             <Th>Control limits</Th>
             <Th>Specification</Th>
             <Th>Every</Th>
-            <Th>Last analysed (UTC)</Th>
+            <Th>Last analysed</Th>
             <Th>
               <span className="sr-only">Chart</span>
             </Th>
@@ -50,7 +50,7 @@ export function AnalytesTable({ tankId, analytes, system, canEditLimits }: Props
               <Td className="whitespace-nowrap">{a.lower_spec === null && a.upper_spec === null ? 'none' : `${fmt(a.lower_spec, a.unit)} – ${fmt(a.upper_spec, a.unit)}`}</Td>
               <Td className="whitespace-nowrap">{a.frequency_hours} h</Td>
               <Td className="whitespace-nowrap">
-                {a.last_taken_at ? when.format(new Date(a.last_taken_at)) : 'never'} {a.is_overdue ? <Badge tone="copper">due</Badge> : null}
+                {a.last_taken_at ? formatWhen(new Date(a.last_taken_at)) : 'never'} {a.is_overdue ? <Badge tone="copper">due</Badge> : null}
               </Td>
               <Td>
                 <Link href={`/baths/${tankId}/analytes/${a.id}`} className="text-action underline">

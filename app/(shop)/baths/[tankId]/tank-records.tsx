@@ -6,9 +6,9 @@ import { EmptyState } from '@/components/ui/empty-state';
 import { Table, TBody, Td, Th, THead, Tr } from '@/components/ui/table';
 import type { findRecentAdditions, findRecentAnalyses } from '@/lib/bath/history';
 import { describeRules, isRuleId } from '@/lib/bath/run-rules';
+import { formatWhen } from '@/lib/bath/display';
 import type { UnitSystem } from '@/lib/plating/units';
 
-const when = new Intl.DateTimeFormat('en-GB', { dateStyle: 'short', timeStyle: 'short', timeZone: 'UTC' });
 const SOURCE: Record<string, string> = { floor: 'floor', office: 'office', lab: 'outside lab', seed: 'history' };
 
 type Analyses = Awaited<ReturnType<typeof findRecentAnalyses>>;
@@ -21,7 +21,7 @@ export function AnalysesTable({ rows, tankCode, system, canCorrect }: { rows: An
     <Table caption="Recent analyses" captionHidden dense>
       <THead>
         <tr>
-          <Th>Taken (UTC)</Th>
+          <Th>Taken</Th>
           <Th>Analyte</Th>
           <Th numeric>Value</Th>
           <Th>Status</Th>
@@ -37,7 +37,7 @@ export function AnalysesTable({ rows, tankCode, system, canCorrect }: { rows: An
           const superseded = !!r.superseded_by_id;
           return (
             <Tr key={r.id} className={superseded ? 'text-ink-faint' : undefined} data-superseded={superseded || undefined}>
-              <Td className={superseded ? 'line-through' : undefined}>{when.format(r.taken_at)}</Td>
+              <Td className={superseded ? 'line-through' : undefined}>{formatWhen(r.taken_at)}</Td>
               <Td className={superseded ? 'line-through' : undefined}>{r.analyte_name}</Td>
               <Td numeric className={superseded ? 'line-through' : undefined}>
                 {formatBathValue(r.value, r.unit, system)}
@@ -71,7 +71,7 @@ export function AdditionsTable({ rows, system }: { rows: Additions; system: Unit
     <Table caption="Recent additions" captionHidden dense>
       <THead>
         <tr>
-          <Th>Made (UTC)</Th>
+          <Th>Made</Th>
           <Th>Material</Th>
           <Th numeric>Amount</Th>
           <Th numeric>Recommended</Th>
@@ -84,7 +84,7 @@ export function AdditionsTable({ rows, system }: { rows: Additions; system: Unit
           const superseded = !!r.superseded_by_id;
           return (
             <Tr key={r.id} className={superseded ? 'text-ink-faint line-through' : undefined}>
-              <Td>{when.format(r.made_at)}</Td>
+              <Td>{formatWhen(r.made_at)}</Td>
               <Td>{r.material}</Td>
               <Td numeric>{formatBathValue(r.amount, r.unit, system)}</Td>
               <Td numeric>{r.recommended_amount !== null && r.recommended_unit ? formatBathValue(r.recommended_amount, r.recommended_unit, system) : '—'}</Td>

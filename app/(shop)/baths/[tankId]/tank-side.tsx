@@ -3,10 +3,10 @@ import { EmptyState } from '@/components/ui/empty-state';
 import type { DoseRow } from '@/lib/bath/dose-rows';
 import type { findHullCellPanels } from '@/lib/bath/history';
 import type { findLimitChanges } from '@/lib/bath/limits';
+import { formatWhen } from '@/lib/bath/display';
 import type { UnitSystem } from '@/lib/plating/units';
 import { AdditiveDoses } from '../../floor/_ui/additive-doses';
 
-const when = new Intl.DateTimeFormat('en-GB', { dateStyle: 'short', timeStyle: 'short', timeZone: 'UTC' });
 
 type Props = {
   system: UnitSystem;
@@ -39,7 +39,7 @@ export function TankSide({ system, doses, lastReading, panels, changes, analyteN
     <div className="grid gap-6 lg:grid-cols-2">
       <Card title="Amp-hours and additives" padding="sm">
         <p className="mb-2 text-sm text-ink-muted">
-          {lastReading ? `Meter ${lastReading.ampHours.toLocaleString('en-US')} A·h at ${when.format(lastReading.at)} UTC.` : 'No meter readings yet.'}
+          {lastReading ? `Meter ${lastReading.ampHours.toLocaleString('en-US')} A·h at ${formatWhen(lastReading.at)}.` : 'No meter readings yet.'}
         </p>
         {doses.length ? <AdditiveDoses doses={doses} system={system} /> : <p className="text-sm text-ink-muted">No additive on this tank is dosed by amp-hours.</p>}
       </Card>
@@ -53,12 +53,12 @@ export function TankSide({ system, doses, lastReading, panels, changes, analyteN
                 {p.file_id ? (
                   <a href={`/api/files/${p.file_id}?inline=1`} className="shrink-0">
                     {/* eslint-disable-next-line @next/next/no-img-element -- bytes come from our own file route */}
-                    <img src={`/api/files/${p.file_id}?inline=1`} alt={`Hull cell panel of ${when.format(p.made_at)}`} className="h-20 w-28 rounded border border-surface-line object-cover" />
+                    <img src={`/api/files/${p.file_id}?inline=1`} alt={`Hull cell panel of ${formatWhen(p.made_at)}`} className="h-20 w-28 rounded border border-surface-line object-cover" />
                   </a>
                 ) : null}
                 <div>
                   <p className="font-medium">
-                    {when.format(p.made_at)} UTC · {p.current_a} A for {p.minutes} min
+                    {formatWhen(p.made_at)} · {p.current_a} A for {p.minutes} min
                   </p>
                   <p className="text-ink-muted">{p.notes || 'No notes.'}</p>
                   <p className="text-xs text-ink-muted">by {p.made_by_name}</p>
@@ -77,7 +77,7 @@ export function TankSide({ system, doses, lastReading, panels, changes, analyteN
               <li key={c.id}>
                 <span className="font-medium">{analyteNames.get(c.analyte_id) ?? 'Analyte'}</span>: {diff(c.before, c.after)}
                 <span className="block text-ink-muted">
-                  {c.changed_by_name}, {when.format(c.created_at)} UTC — “{c.reason}”
+                  {c.changed_by_name}, {formatWhen(c.created_at)} — “{c.reason}”
                 </span>
               </li>
             ))}

@@ -6,13 +6,12 @@ import { EmptyState } from '@/components/ui/empty-state';
 import { PageHeader } from '@/components/ui/page-header';
 import { StatusShape } from '@/components/ui/status-shape';
 import { can, requirePageUser } from '@/lib/auth/current-user';
+import { formatWhen } from '@/lib/bath/display';
 import { ALERT_KIND_LABEL, ALERT_STATE_LABEL, findAlerts } from '@/lib/bath/alerts';
 import { getBathSettings } from '@/lib/bath/settings';
 import { AcknowledgeForm } from './ack-form';
 
 export const metadata: Metadata = { title: 'Bath alerts' };
-
-const when = new Intl.DateTimeFormat('en-GB', { dateStyle: 'medium', timeStyle: 'short', timeZone: 'UTC' });
 
 export default async function BathAlertsPage() {
   const user = await requirePageUser('bath.read', '/baths/alerts');
@@ -35,8 +34,8 @@ export default async function BathAlertsPage() {
             <div className="flex flex-col gap-3" data-testid="open-alert">
               <p className="text-sm text-ink">{a.message}</p>
               <p className="text-xs text-ink-muted">
-                Raised {when.format(a.raised_at)} UTC{a.occurrences > 1 ? ` · seen ${a.occurrences} times, last ${when.format(a.last_seen_at)} UTC` : ''}
-                {a.escalated_at ? ` · escalated ${when.format(a.escalated_at)} UTC` : ''} ·{' '}
+                Raised {formatWhen(a.raised_at)}{a.occurrences > 1 ? ` · seen ${a.occurrences} times, last ${formatWhen(a.last_seen_at)}` : ''}
+                {a.escalated_at ? ` · escalated ${formatWhen(a.escalated_at)}` : ''} ·{' '}
                 <Link href={`/baths/${a.tank_id}`} className="text-action underline">tank</Link>
                 {a.analyte_id ? <> · <Link href={`/baths/${a.tank_id}/analytes/${a.analyte_id}`} className="text-action underline">chart</Link></> : null}
               </p>
@@ -54,7 +53,7 @@ export default async function BathAlertsPage() {
               <li key={a.id}>
                 <span className="font-medium">{ALERT_KIND_LABEL[a.kind]} · {a.tank_code}{a.analyte_name ? `, ${a.analyte_name}` : ''}</span>: {a.message}
                 <span className="block text-ink-muted">
-                  {a.acknowledged_by_name}, {a.acknowledged_at ? when.format(a.acknowledged_at) : ''} UTC — {a.corrective_action}
+                  {a.acknowledged_by_name}, {a.acknowledged_at ? formatWhen(a.acknowledged_at) : ''} — {a.corrective_action}
                 </span>
               </li>
             ))}

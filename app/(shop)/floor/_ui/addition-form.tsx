@@ -104,7 +104,7 @@ export function AdditionForm({ tank, analytes, defaults, system, title = 'Record
             const m = analytes.find((a) => a.id === e.target.value)?.material;
             if (m && !material) setMaterial(m);
           }}
-          placeholder="The whole bath (no single analyte)"
+          placeholder="Whole bath"
           options={analytes.map((a) => ({ value: a.id, label: a.name }))}
         />
       ) : null}

@@ -3,7 +3,7 @@
 import { useState } from 'react';
 import { Button, LinkButton } from '@/components/ui/button';
 import { NumberField } from '@/components/ui/field';
-import { roundForDisplay } from '@/lib/bath/display';
+import { formatWhen, roundForDisplay } from '@/lib/bath/display';
 import type { DoseRow } from '@/lib/bath/dose-rows';
 import { floorQueue, newEntryKey, useEntryFate } from '@/lib/floor/browser-queue';
 import type { UnitSystem } from '@/lib/plating/units';
@@ -53,7 +53,7 @@ export function MeterEntry({ tank, lastReading, doses, system }: Props) {
       ) : (
         <form className="flex flex-col gap-4" noValidate onSubmit={(e) => { e.preventDefault(); save(); }}>
           <p className="text-base text-ink-muted">
-            {lastReading ? `Last reading ${lastReading.ampHours.toLocaleString('en-US')} A·h on ${new Date(lastReading.at).toLocaleString()}.` : 'No reading yet on this tank.'}
+            {lastReading ? `Last reading ${lastReading.ampHours.toLocaleString('en-US')} A·h on ${formatWhen(lastReading.at)}.` : 'No reading yet on this tank.'}
           </p>
           <NumberField
             size="lg"

@@ -4,7 +4,7 @@ import { useMemo, useState } from 'react';
 import { VerdictBadge } from '@/components/bath/verdict-badge';
 import { Button, LinkButton } from '@/components/ui/button';
 import { NumberField } from '@/components/ui/field';
-import { canConvert, displayUnitOf, roundForDisplay, toDisplay, verdictSentence } from '@/lib/bath/display';
+import { canConvert, displayUnitOf, formatWhen, roundForDisplay, toDisplay, verdictSentence } from '@/lib/bath/display';
 import { evaluateReading } from '@/lib/bath/evaluate';
 import type { FloorAnalyte, CorrectionTarget } from '@/lib/bath/floor-queries';
 import { getMethod } from '@/lib/bath/methods';
@@ -143,7 +143,7 @@ export function AnalysisEntry({ tank, analyte, system, correcting, prefill, addi
     >
       {correcting ? (
         <p className="rounded-md border border-copper/40 bg-copper-soft px-3 py-2 text-base text-ink">
-          Correcting the entry of {new Date(correcting.takenAt).toLocaleString()}: {roundForDisplay(toDisplay(correcting.value, correcting.unit, system).value)}{' '}
+          Correcting the entry of {formatWhen(correcting.takenAt)}: {roundForDisplay(toDisplay(correcting.value, correcting.unit, system).value)}{' '}
           {displayUnitOf(correcting.unit, system)}. The old entry stays on record, struck through.
         </p>
       ) : null}

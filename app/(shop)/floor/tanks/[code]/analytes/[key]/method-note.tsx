@@ -6,7 +6,7 @@ export function MethodNote({ method }: { method: AnalysisMethod }) {
   if (method.kind === 'titration') {
     const t = method.titrant;
     detail =
-      `${effectiveSampleMl(method)} mL of bath, ${t.concentration} ${t.concentrationUnit} ${t.name.toLowerCase()}; ` +
+      `${effectiveSampleMl(method)} mL of bath, ${t.concentration} ${t.concentrationUnit} ${t.name}; ` +
       `${method.indicator}. Result = burette mL${method.blankMl ? ` − ${method.blankMl} mL blank` : ''} × ${factorPerMl(method).toPrecision(4)} ${method.unit}.`;
   } else if (method.kind === 'direct') {
     detail = method.procedure ?? 'Enter the reading as shown.';

@@ -7,6 +7,7 @@ import { VerdictBadge } from '@/components/bath/verdict-badge';
 import { PageHeader } from '@/components/ui/page-header';
 import { requirePageUser } from '@/lib/auth/current-user';
 import { getCorrectionTarget, getFloorTank, recentForAnalyte } from '@/lib/bath/floor-queries';
+import { formatWhen } from '@/lib/bath/display';
 import { getMethod } from '@/lib/bath/methods';
 import { supplyMaterial } from '@/lib/bath/supplies';
 import { OutboxPanel } from '../../../../_ui/outbox-panel';
@@ -58,7 +59,7 @@ export default async function FloorAnalytePage({ params, searchParams }: Params)
           <ul className="flex flex-col gap-1">
             {recent.map((r) => (
               <li key={r.id} className={`flex flex-wrap items-center gap-2 ${r.supersededBy ? 'text-ink-faint line-through' : ''}`}>
-                <span className="tabular">{new Date(r.takenAt).toLocaleString('en-GB', { dateStyle: 'short', timeStyle: 'short', timeZone: 'UTC' })} UTC</span>
+                <span className="tabular">{formatWhen(r.takenAt)}</span>
                 <span className="tabular font-medium">{formatBathValue(r.value, r.unit, user.unitSystem)}</span>
                 {r.supersededBy ? <span className="no-underline">(corrected)</span> : <VerdictBadge verdict={r.verdict} size="sm" />}
               </li>
