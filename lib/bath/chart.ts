@@ -5,13 +5,21 @@ import type { Database } from '@/db/types';
 import { AppError } from '@/lib/errors';
 import type { UnitSystem } from '@/lib/plating/units';
 import { convertSymbol, displayUnitOf } from './display';
-import { capability, individualsChart, RULE_TEXT } from './spc';
+import { capabilityFromValues, individualsChart, RULE_TEXT } from './spc';
 
 // The individuals control chart of one analyte over a date range: the current (not superseded)
 // analyses, limits from the data (phase I, MR̄/d2 sigma), the Western Electric rules at each point,
 // the specification limits and Cpk where they exist. One indexed range scan serves years of points.
 
 export type ChartRange = { from: Date; to: Date };
+
+/**
+ * Where the control limits come from: all analyses shown (phase I), or a baseline of the first
+ * BASELINE_POINTS shown, against which the later ones are judged (phase II). A drift late in a
+ * long range pulls phase I limits towards itself; a baseline shows it plainly.
+ */
+export type LimitBasis = 'all' | 'baseline';
+export const BASELINE_POINTS = 30;
 
 export type ChartData = {
   analyte: { id: string; key: string; name: string; tankCode: string; tankName: string };
@@ -20,6 +28,7 @@ export type ChartData = {
   limits: { cl: number; ucl: number; lcl: number; lsl?: number; usl?: number } | null;
   capability: { cp: number | null; cpk: number } | null;
   sigmaBasis: string | null;
+  limitBasis: LimitBasis;
   warnings: string[];
 };
 
@@ -46,6 +55,7 @@ export async function getChartData(
   range: ChartRange,
   system: UnitSystem,
   executor: Kysely<Database> = defaultDb,
+  basis: LimitBasis = 'all',
 ): Promise<ChartData> {
   const analyte = await executor
     .selectFrom('tank_analytes as a')
@@ -70,9 +80,12 @@ export async function getChartData(
   };
   let chart: ReturnType<typeof individualsChart> | null = null;
   const warnings: string[] = [];
+  const useBaseline = basis === 'baseline' && values.length > BASELINE_POINTS;
   if (values.length >= 2) {
     try {
-      chart = individualsChart(values);
+      const base = useBaseline ? individualsChart(values.slice(0, BASELINE_POINTS)) : null;
+      chart = base ? individualsChart(values, { centre: base.centre, sigma: base.sigma }) : individualsChart(values);
+      if (base) chart.sigmaBasis = base.sigmaBasis;
       warnings.push(...chart.warnings);
     } catch (e) {
       if (!(e instanceof AppError)) throw e;
@@ -89,7 +102,15 @@ export async function getChartData(
   const lsl = analyte.lower_spec ?? undefined;
   const usl = analyte.upper_spec ?? undefined;
   const hasSpec = lsl !== undefined || usl !== undefined;
-  const cap = chart && hasSpec ? capability({ mean: chart.centre, sigma: chart.sigma, lsl, usl }) : null;
+  // Capability of the analyses shown: their mean and within (moving-range) sigma, whatever the limit basis.
+  let cap: ReturnType<typeof capabilityFromValues> | null = null;
+  if (chart && hasSpec) {
+    try {
+      cap = capabilityFromValues(values, { lsl, usl });
+    } catch (e) {
+      if (!(e instanceof AppError)) throw e;
+    }
+  }
   return {
     ...base,
     points,
@@ -104,6 +125,7 @@ export async function getChartData(
       : null,
     capability: cap ? { cp: cap.cp, cpk: cap.cpk } : null,
     sigmaBasis: chart?.sigmaBasis ?? null,
+    limitBasis: useBaseline ? 'baseline' : 'all',
     warnings,
   };
 }

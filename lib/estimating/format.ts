@@ -40,7 +40,7 @@ export function geometryRows(g: GeometryFigures, system: UnitSystem): GeometryRo
   ];
   if (g.boundingBoxMm) {
     const unit = LENGTH_UNIT[system];
-    rows.push({ label: 'Bounding box', text: g.boundingBoxMm.map((v) => formatNumber(lengthFromMm(v, unit), 4)).join(' × ') + `${SPACE}${unit}` });
+    rows.push({ label: 'Bounding box', text: g.boundingBoxMm.map((v) => formatValue(lengthFromMm(v, unit), '')).join(' × ') + `${SPACE}${unit}` });
   }
   if (g.triangleCount !== null) rows.push({ label: 'Triangles', text: g.triangleCount.toLocaleString('en-US') });
   if (g.volumeCm3 !== null) {

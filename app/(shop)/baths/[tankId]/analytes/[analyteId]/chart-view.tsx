@@ -3,7 +3,7 @@
 import { useEffect, useState } from 'react';
 import { ControlChart } from '@/components/control-chart/control-chart';
 import { Button, buttonClasses } from '@/components/ui/button';
-import { TextField } from '@/components/ui/field';
+import { SelectField, TextField } from '@/components/ui/field';
 import { FormMessage } from '@/components/ui/form-message';
 import { Spinner } from '@/components/ui/spinner';
 import type { ChartData } from '@/lib/bath/chart';
@@ -24,7 +24,8 @@ export function ChartView({ tankId, analyteId }: { tankId: string; analyteId: st
   const [data, setData] = useState<ChartData | null>(null);
   const [error, setError] = useState<string | null>(null);
   const [loading, setLoading] = useState(false);
-  const url = `/api/baths/${tankId}/analytes/${analyteId}/chart?from=${range.from}&to=${range.to}`;
+  const [basis, setBasis] = useState<'baseline' | 'all'>('baseline');
+  const url = `/api/baths/${tankId}/analytes/${analyteId}/chart?from=${range.from}&to=${range.to}&limits=${basis}`;
 
   useEffect(() => {
     const ctrl = new AbortController();
@@ -56,6 +57,16 @@ export function ChartView({ tankId, analyteId }: { tankId: string; analyteId: st
       >
         <TextField label="From" name="from" type="date" value={draft.from} onChange={(e) => setDraft((d) => ({ ...d, from: e.target.value }))} />
         <TextField label="To" name="to" type="date" value={draft.to} onChange={(e) => setDraft((d) => ({ ...d, to: e.target.value }))} />
+        <SelectField
+          label="Control limits from"
+          name="limits"
+          value={basis}
+          onChange={(e) => setBasis(e.target.value === 'all' ? 'all' : 'baseline')}
+          options={[
+            { value: 'baseline', label: 'the first 30 analyses shown' },
+            { value: 'all', label: 'all analyses shown' },
+          ]}
+        />
         <Button type="submit" variant="secondary">Show</Button>
         {PRESETS.map((p) => (
           <Button
@@ -91,8 +102,9 @@ export function ChartView({ tankId, analyteId }: { tankId: string; analyteId: st
             <div><dt className="text-ink-muted">Cp</dt><dd className="text-lg font-semibold tabular">{data.capability?.cp != null ? data.capability.cp.toFixed(2) : '—'}</dd></div>
           </dl>
           <p className="text-xs text-ink-muted">
-            Control limits are worked out from the analyses shown (individuals chart, σ from the average moving range{data.sigmaBasis ? `: ${data.sigmaBasis}` : ''});
-            they are not the bath sheet&apos;s control range. Rules: Western Electric run rules. Times in UTC.
+            Control limits are worked out from {data.limitBasis === 'baseline' ? 'the first 30 analyses shown' : 'all analyses shown'} (individuals chart, σ from the
+            average moving range{data.sigmaBasis ? `; ${data.sigmaBasis}` : ''}); they are not the bath sheet&apos;s control range. Rules: Western Electric run rules.
+            Times in UTC.
           </p>
           {data.warnings.map((w) => <FormMessage key={w} tone="info" message={w} />)}
         </>

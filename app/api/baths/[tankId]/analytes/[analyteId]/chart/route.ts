@@ -1,4 +1,4 @@
-// GET /api/baths/<tankId>/analytes/<analyteId>/chart?from&to[&format=csv] — staff who may read
+// GET /api/baths/<tankId>/analytes/<analyteId>/chart?from&to[&limits=baseline][&format=csv] — staff who may read
 // bath records (bath.read): the analyte's individuals chart data, in the reader's units.
 import { NextResponse } from 'next/server';
 import { chartCsv, getChartData, parseChartRange } from '@/lib/bath/chart';
@@ -14,7 +14,7 @@ export const GET = withPermission<{ tankId: string; analyteId: string }>('bath.r
   if (!UUID.test(tankId) || !UUID.test(analyteId)) throw new AppError('NOT_FOUND', 'That analyte does not belong to this tank.');
   const params = new URL(req.url).searchParams;
   const range = parseChartRange(params.get('from'), params.get('to'));
-  const data = await getChartData(tankId, analyteId, range, user.unitSystem);
+  const data = await getChartData(tankId, analyteId, range, user.unitSystem, undefined, params.get('limits') === 'baseline' ? 'baseline' : 'all');
   if (params.get('format') === 'csv') {
     const name = `${data.analyte.tankCode}-${data.analyte.key}-${range.from.toISOString().slice(0, 10)}.csv`;
     return new Response(chartCsv(data), {
