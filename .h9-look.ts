@@ -4,7 +4,7 @@ async function main() {
   const [email, ...paths] = process.argv.slice(2);
   const browser = await chromium.launch({ executablePath: '/usr/bin/chromium', args: ['--headless', '--no-sandbox', '--disable-gpu'] });
   try {
-    const page = await browser.newPage({ viewport: { width: 1280, height: 900 } });
+    const page = await browser.newPage({ viewport: { width: 1280, height: 1400 } });
     await page.goto(`${BASE}/sign-in`);
     await page.getByLabel('E-mail').fill(email!);
     await page.getByLabel('Password').fill('plating-demo-2026');
@@ -14,7 +14,7 @@ async function main() {
       const [url, name] = p.split('=');
       const res = await page.goto(`${BASE}${url}`);
       await page.waitForTimeout(800);
-      await page.screenshot({ path: `/tmp/h9/${name}.png`, fullPage: true });
+      await page.screenshot({ path: `/tmp/h9/${name}.png`, fullPage: !name!.endsWith('-top'), clip: name!.endsWith('-top') ? { x: 0, y: Number(process.env.Y ?? 0), width: 1280, height: 1400 } : undefined });
       console.log(url, res?.status());
     }
   } finally {

@@ -1,5 +1,5 @@
 import { chromium } from 'playwright-core';
-const BASE = 'http://127.0.0.1:3216';
+const BASE = process.env.BASE ?? 'http://127.0.0.1:3216';
 const OUT = '/tmp/h6';
 const browser = await chromium.launch({ executablePath: '/usr/bin/chromium', args: ['--headless', '--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run', '--disable-background-networking', '--disable-component-update', '--disable-sync'] });
 async function as(email: string, shots: [string, string][], viewport = { width: 1280, height: 900 }) {
@@ -13,7 +13,7 @@ async function as(email: string, shots: [string, string][], viewport = { width: 
   await page.waitForURL((u) => !u.pathname.startsWith('/sign-in'));
   for (const [name, path] of shots) {
     const res = await page.goto(`${BASE}${path}`, { timeout: 300_000 });
-    await page.waitForTimeout(8000);
+    await page.waitForTimeout(Number(process.env.WAIT ?? 8000));
     await page.screenshot({ path: `${OUT}/${name}.png`, fullPage: true });
     console.log(name, res?.status());
   }

@@ -15,4 +15,4 @@ export * from './types/quotes';
 export * from './types/quality';
 export * from './types/billing';
 export * from './types/bath';
-export type { Json, Timestamp, TimestampNullable, DateColumn, Numeric, NumericNullable } from './types/columns';
+export type { Json, Timestamp, GeneratedTimestamp, TimestampNullable, DateColumn, Numeric, NumericNullable } from './types/columns';

@@ -1,6 +1,6 @@
 // Tables of migration 2026_12_01_2210_create_core_records.
 import type { Generated, Selectable } from 'kysely';
-import type { Json, Numeric, NumericNullable, DateColumn, Timestamp } from './columns';
+import type { Json, Numeric, NumericNullable, DateColumn, Timestamp, GeneratedTimestamp } from './columns';
 
 export type FilesTable = {
   id: Generated<string>;
@@ -10,7 +10,7 @@ export type FilesTable = {
   sha256: string;
   bytes: Buffer;
   uploaded_by: string | null;
-  created_at: Generated<Timestamp>;
+  created_at: GeneratedTimestamp;
 };
 
 export type CustomerContactsTable = {
@@ -21,7 +21,7 @@ export type CustomerContactsTable = {
   phone: Generated<string>;
   is_billing: Generated<boolean>;
   user_id: string | null;
-  created_at: Generated<Timestamp>;
+  created_at: GeneratedTimestamp;
 };
 
 export type LinesTable = {
@@ -29,7 +29,7 @@ export type LinesTable = {
   name: string;
   method: 'rack' | 'barrel' | 'mixed';
   description: Generated<string>;
-  created_at: Generated<Timestamp>;
+  created_at: GeneratedTimestamp;
 };
 
 export type TanksTable = {
@@ -48,7 +48,7 @@ export type TanksTable = {
   temp_min_c: NumericNullable;
   temp_max_c: NumericNullable;
   is_active: Generated<boolean>;
-  created_at: Generated<Timestamp>;
+  created_at: GeneratedTimestamp;
 };
 
 export type CalculationsTable = {
@@ -58,7 +58,7 @@ export type CalculationsTable = {
   result: Json<unknown>;
   area_dm2: Numeric;
   created_by: string | null;
-  created_at: Generated<Timestamp>;
+  created_at: GeneratedTimestamp;
 };
 
 export type PartsTable = {
@@ -75,8 +75,8 @@ export type PartsTable = {
   calculation_id: string | null;
   drawing_file_id: string | null;
   stl_file_id: string | null;
-  created_at: Generated<Timestamp>;
-  updated_at: Generated<Timestamp>;
+  created_at: GeneratedTimestamp;
+  updated_at: GeneratedTimestamp;
 };
 
 export type ProcessStep = { step: string; note?: string };
@@ -106,7 +106,7 @@ export type FinishesTable = {
   bake_hours: NumericNullable;
   line_id: string | null;
   is_active: Generated<boolean>;
-  created_at: Generated<Timestamp>;
+  created_at: GeneratedTimestamp;
 };
 
 export type RateSetsTable = {
@@ -125,7 +125,7 @@ export type RateSetsTable = {
   margin_pct: Generated<number>;
   quote_valid_days: Generated<number>;
   created_by: string | null;
-  created_at: Generated<Timestamp>;
+  created_at: GeneratedTimestamp;
 };
 
 export type CoreRecordTables = {

@@ -1,6 +1,6 @@
 // Tables of migration 2026_12_01_2200_create_foundation.
 import type { Generated, Insertable, Selectable, Updateable } from 'kysely';
-import type { Json, Timestamp, TimestampNullable } from './columns';
+import type { Json, Timestamp, TimestampNullable, GeneratedTimestamp } from './columns';
 
 export type Role = 'owner' | 'estimator' | 'plater' | 'supervisor' | 'customer';
 export type UnitSystem = 'metric' | 'us';
@@ -15,8 +15,8 @@ export type CustomersTable = {
   phone: Generated<string>;
   payment_terms_days: Generated<number>;
   tax_rate_bp: Generated<number>;
-  created_at: Generated<Timestamp>;
-  updated_at: Generated<Timestamp>;
+  created_at: GeneratedTimestamp;
+  updated_at: GeneratedTimestamp;
 };
 
 export type UsersTable = {
@@ -28,8 +28,8 @@ export type UsersTable = {
   password_hash: string | null;
   unit_system: Generated<UnitSystem>;
   is_active: Generated<boolean>;
-  created_at: Generated<Timestamp>;
-  updated_at: Generated<Timestamp>;
+  created_at: GeneratedTimestamp;
+  updated_at: GeneratedTimestamp;
 };
 
 export type SessionsTable = { id: string; user_id: string; expires_at: Timestamp };
@@ -40,7 +40,7 @@ export type PasswordTokensTable = {
   purpose: 'reset' | 'invite';
   expires_at: Timestamp;
   used_at: TimestampNullable;
-  created_at: Generated<Timestamp>;
+  created_at: GeneratedTimestamp;
 };
 
 export type SignInAttemptsTable = {
@@ -48,7 +48,7 @@ export type SignInAttemptsTable = {
   email_key: string;
   ip: string;
   succeeded: boolean;
-  created_at: Generated<Timestamp>;
+  created_at: GeneratedTimestamp;
 };
 
 export type EmailsTable = {
@@ -59,7 +59,7 @@ export type EmailsTable = {
   message_id: string | null;
   status: 'sent' | 'failed';
   error: string | null;
-  created_at: Generated<Timestamp>;
+  created_at: GeneratedTimestamp;
 };
 
 export type AuditLogTable = {
@@ -69,10 +69,10 @@ export type AuditLogTable = {
   entity: string;
   entity_id: string | null;
   detail: Json<Record<string, unknown>>;
-  created_at: Generated<Timestamp>;
+  created_at: GeneratedTimestamp;
 };
 
-export type SettingsTable = { key: string; value: Json<unknown>; updated_at: Generated<Timestamp> };
+export type SettingsTable = { key: string; value: Json<unknown>; updated_at: GeneratedTimestamp };
 
 export type FoundationTables = {
   customers: CustomersTable;

@@ -1,6 +1,6 @@
 // Tables of migration 2026_12_01_2220_create_quotes_and_work_orders.
 import type { Generated, Selectable } from 'kysely';
-import type { DateColumn, Json, Numeric, NumericNullable, Timestamp, TimestampNullable } from './columns';
+import type { DateColumn, Json, Numeric, NumericNullable, Timestamp, TimestampNullable, GeneratedTimestamp } from './columns';
 
 export type PricingBasis = 'piece' | 'hundred' | 'kg' | 'lb' | 'ft2' | 'dm2' | 'load';
 export type QuoteStatus = 'draft' | 'sent' | 'accepted' | 'declined' | 'expired' | 'superseded';
@@ -26,8 +26,8 @@ export type QuotesTable = {
   total_cents: Generated<number>;
   previous_revision_id: string | null;
   created_by: string | null;
-  created_at: Generated<Timestamp>;
-  updated_at: Generated<Timestamp>;
+  created_at: GeneratedTimestamp;
+  updated_at: GeneratedTimestamp;
   sent_at: TimestampNullable;
   expires_at: TimestampNullable;
   decided_at: TimestampNullable;
@@ -74,8 +74,8 @@ export type WorkOrdersTable = {
   pricing_basis: PricingBasis;
   total_cents: number;
   quoted_cost: Json<unknown>;
-  created_at: Generated<Timestamp>;
-  updated_at: Generated<Timestamp>;
+  created_at: GeneratedTimestamp;
+  updated_at: GeneratedTimestamp;
 };
 
 export type WorkOrderEventsTable = {
@@ -85,7 +85,7 @@ export type WorkOrderEventsTable = {
   to_state: WorkOrderState;
   actor_id: string | null;
   note: Generated<string>;
-  created_at: Generated<Timestamp>;
+  created_at: GeneratedTimestamp;
 };
 
 export type PlatingRunsTable = {
@@ -104,7 +104,7 @@ export type PlatingRunsTable = {
   is_below_minimum: boolean;
   logged_by: string | null;
   idempotency_key: string | null;
-  created_at: Generated<Timestamp>;
+  created_at: GeneratedTimestamp;
 };
 
 export type QuoteTables = {

@@ -73,19 +73,24 @@ export function formUnits(system: UnitSystem): FormUnits {
   };
 }
 
-/** A number as an input shows it: ten significant figures, no binary noise (0.1 + 0.2). */
-export function text(value: number | null | undefined): string {
+/**
+ * A number as an input shows it, without binary noise (0.1 + 0.2). Counts and values typed in
+ * the box's own unit keep ten significant figures; values converted from another unit get six,
+ * which is finer than any gauge reads (25 µm → 0.984252 mil, not 0.9842519685).
+ */
+export function text(value: number | null | undefined, significantFigures = 10): string {
   if (value === null || value === undefined || !Number.isFinite(value)) return '';
-  return String(Number(value.toPrecision(10)));
+  return String(Number(value.toPrecision(significantFigures)));
 }
 
+const converted = (value: number) => text(value, 6);
 const pct = (fraction: number) => text(fraction * 100);
 
 export function processFields(p: JobProcess, system: UnitSystem): ProcessFields {
   const u = formUnits(system);
   return {
     metalKey: `${p.element}${p.charge}+`,
-    currentDensity: text(fromStorage(p.currentDensityAdm2, u.currentDensity)),
+    currentDensity: converted(fromStorage(p.currentDensityAdm2, u.currentDensity)),
     efficiencyPct: pct(p.efficiency),
     distributionRatio: text(p.distributionRatio),
     loading: p.loading,
@@ -93,8 +98,8 @@ export function processFields(p: JobProcess, system: UnitSystem): ProcessFields 
     tankVolts: text(p.tankVolts),
     rectifierMaxA: text(p.rectifierMaxA),
     rectifierEfficiencyPct: pct(p.rectifierEfficiency),
-    dragOut: text(dragOutFromStorage(p.dragOutLPerM2, u.dragOut)),
-    bathMetal: text(fromStorage(p.bathMetalGPerL, u.concentration)),
+    dragOut: converted(dragOutFromStorage(p.dragOutLPerM2, u.dragOut)),
+    bathMetal: converted(fromStorage(p.bathMetalGPerL, u.concentration)),
     anodes: p.anodes ?? 'soluble',
     anodeLossPct: text(p.anodeLossPercent ?? 0),
     replenishmentSalt: p.replenishmentSalt ?? '',
@@ -121,7 +126,7 @@ export function defaultForm(system: UnitSystem, library: readonly LibraryProcess
     hardnessHrc: '',
     tensileMpa: '',
     quantity: '500',
-    minimumThickness: text(fromStorage(first?.minimumThicknessUm ?? 8, u.thickness)),
+    minimumThickness: converted(fromStorage(first?.minimumThicknessUm ?? 8, u.thickness)),
     finishId: first?.finishId ?? '',
     ...processFields(process, system),
     contactMaterial: '',
@@ -135,7 +140,7 @@ export function applyLibrary(form: WorkbenchForm, entry: LibraryProcess, system:
     ...form,
     ...processFields(entry.process, system),
     finishId: entry.finishId,
-    minimumThickness: text(fromStorage(entry.minimumThicknessUm, u.thickness)),
+    minimumThickness: converted(fromStorage(entry.minimumThicknessUm, u.thickness)),
   };
 }
 
@@ -152,12 +157,12 @@ function shapeEntryOf(shape: Extract<CalculationInput['geometry'], { kind: 'shap
   const source = shape as unknown as Record<string, unknown>;
   for (const d of SHAPES[shape.kind as ShapeKind].dims) {
     const v = source[d.key];
-    if (typeof v === 'number') dims[d.key] = text(lengthFromMm(v, unit));
+    if (typeof v === 'number') dims[d.key] = converted(lengthFromMm(v, unit));
   }
   for (const f of SHAPES[shape.kind as ShapeKind].flags) flags[f.key] = source[f.key] === true;
   if (shape.kind === 'plate-with-holes') {
     const holes = shape.holes[0];
-    dims.holeDiameterMm = holes ? text(lengthFromMm(holes.diameterMm, unit)) : '1';
+    dims.holeDiameterMm = holes ? converted(lengthFromMm(holes.diameterMm, unit)) : '1';
     dims.holeCount = text(holes?.count ?? 0);
   }
   return { kind: shape.kind, unit, dims, flags };
@@ -172,13 +177,13 @@ export function formFromInput(input: CalculationInput, system: UnitSystem): Work
     ...base,
     geometryMode: g.kind,
     shape: g.kind === 'shape' ? shapeEntryOf(g.shape, system) : base.shape,
-    area: g.kind === 'area' ? text(fromStorage(g.areaDm2, u.area)) : '',
+    area: g.kind === 'area' ? converted(fromStorage(g.areaDm2, u.area)) : '',
     stl: g.kind === 'stl' ? g : null,
     substrate: input.substrate,
     hardnessHrc: text(input.hardnessHrc),
     tensileMpa: text(input.tensileMpa),
     quantity: text(input.quantity),
-    minimumThickness: text(fromStorage(input.minimumThicknessUm, u.thickness)),
+    minimumThickness: converted(fromStorage(input.minimumThicknessUm, u.thickness)),
     finishId: input.finishId ?? '',
     ...processFields(input.process, system),
     contactMaterial: input.contact?.material ?? '',

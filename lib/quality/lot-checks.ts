@@ -63,7 +63,8 @@ export function thicknessState(lot: LotRecord): ThicknessState {
   const summary = lot.readings.length ? summarize(lot.readings.map((r) => r.thicknessUm)) : null;
   const failing = lot.readings.filter((r) => r.status !== 'pass');
   const unresolved = failing.filter((r) => !acceptedByDisposition(lot, r));
-  const plan = sample.inspectAll ? `every part of the lot of ${sample.lotSize}` : `lot of ${sample.lotSize}, code ${sample.codeLetter}`;
+  const lot$ = sample.lotSize.toLocaleString('en-US');
+  const plan = sample.inspectAll ? `every part of the lot of ${lot$}` : `lot of ${lot$}, code ${sample.codeLetter}`;
   const count: LotCheck =
     partsMeasured >= sample.sampleSize
       ? { key: 'thickness_count', ok: true, message: `${partsMeasured} of ${sample.sampleSize} sampled parts measured (${plan}).` }

@@ -27,6 +27,10 @@ async function as<T>(email: string, fn: (page: Page) => Promise<T>, viewport?: {
   try {
     await signInAs(page, email, DEMO_PASSWORD);
     return await fn(page);
+  } catch (err) {
+    // What the page showed when a step failed.
+    await screenshot(page, `quotes-failed-${email.split('@')[0]}`).catch(() => undefined);
+    throw err;
   } finally {
     await context.close();
   }
@@ -37,15 +41,15 @@ describe('quote to work order', () => {
     const since = Date.now();
     await as(ESTIMATOR, async (page) => {
       await page.goto(`${APP_URL}/quotes/new`);
-      await page.getByLabel('Customer', { exact: true }).selectOption({ label: 'Northgate Fastener Co. (NGF)' });
+      await page.getByLabel(/^Customer\b/).selectOption({ label: 'Northgate Fastener Co. (NGF)' });
       await page.getByRole('button', { name: 'Create draft quote' }).click();
       await page.waitForURL(/\/quotes\/[0-9a-f-]{36}$/);
       quoteNumber = (await page.getByRole('heading', { level: 1 }).innerText()).trim();
       expect(quoteNumber).toMatch(/^Q\d{4}-\d{4,}$/);
 
-      await page.getByLabel('Part', { exact: true }).selectOption({ label: 'NGF-HX-0816 rev C · Hex cap screw M8×16, class 8.8' });
-      await page.getByLabel('Finish', { exact: true }).selectOption({ label: 'ZN-B633-SC2 · Zinc, clear trivalent passivate (barrel)' });
-      await page.getByLabel('Quantity', { exact: true }).fill('5000');
+      await page.getByLabel(/^Part\b/).selectOption({ label: 'NGF-HX-0816 rev C · Hex cap screw M8×16, class 8.8' });
+      await page.getByLabel(/^Finish\b/).selectOption({ label: 'ZN-B633-SC2 · Zinc, clear trivalent passivate (barrel)' });
+      await page.getByLabel(/^Quantity\b/).fill('5000');
       await page.getByLabel('Priced').selectOption('lb');
       await page.getByRole('button', { name: 'Add and price line' }).click();
       await page.getByText('Line added and priced.').waitFor();

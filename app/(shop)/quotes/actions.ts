@@ -49,11 +49,9 @@ export const clearOverrideAction = formAction('quotes.price', lineRefSchema, asy
 export const sendQuoteAction = formAction('quotes.write', sendQuoteSchema, async (input, user) => {
   await markQuoteSent(user, input);
   const mail = await emailQuoteToContact(input.quoteId);
-  revalidatePath(at(input.quoteId));
   revalidatePath('/quotes');
-  return mail.ok
-    ? { ok: true, message: `Sent to ${mail.to} with the PDF attached.` }
-    : { ok: false, message: 'The quote is marked sent, but the e-mail could not be delivered. Use "E-mail again" once the mail server is reachable.' };
+  // The send form leaves the page once the quote is sent, so the outcome travels in the address.
+  redirect(`${at(input.quoteId)}?sent=${mail.ok ? 'ok' : 'failed'}`);
 });
 
 export const resendQuoteAction = formAction('quotes.write', quoteRefSchema, async (input) => {

@@ -2,7 +2,8 @@
 
 import { useCallback, useEffect, useMemo, useState } from 'react';
 import { Card } from '@/components/ui/card';
-import { formatNumber, fromStorage, displayUnit, UNITS, type UnitSystem } from '@/lib/plating';
+import { displayUnit, fromStorage, type UnitSystem } from '@/lib/plating';
+import { formatValue } from '@/lib/estimating/format';
 import { calculationInputSchema, type CalculationInput } from '@/lib/estimating/calculation-schema';
 import { defaultForm, formFromInput, type WorkbenchForm } from '@/lib/estimating/form-state';
 import type { LibraryProcess } from '@/lib/estimating/process-library';
@@ -28,7 +29,7 @@ function suggestTitle(view: WorkbenchView, system: UnitSystem): string {
   const e = view.result?.estimate;
   if (!e) return '';
   const unit = displayUnit('thickness', system);
-  return `${e.metal.name} ${formatNumber(fromStorage(e.minimumThicknessUm, unit), 3)} ${UNITS[unit].symbol}, ${e.quantity} parts`;
+  return `${e.metal.name} ${formatValue(fromStorage(e.minimumThicknessUm, unit), unit, 3)}, ${e.quantity} parts`;
 }
 
 export function Workbench({ system, library, initial, initialTitle }: Props) {

@@ -39,7 +39,7 @@ export default async function EfficiencyPage() {
             <Card
               key={`${s.tankId}${s.finishCode}`}
               title={`${s.tankCode} ${s.tankName} · ${s.finishCode}`}
-              description={`${s.finishName}. ${s.points.length} lots. Efficiency used for quoting: ${s.assumedEfficiency === null ? 'not set' : `${pct(s.assumedEfficiency)} %`}.${chart ? ` Mean measured ${chart.centre.toFixed(1)} %.` : ''}`}
+              description={`${s.finishName}. ${s.points.length} ${s.points.length === 1 ? 'lot' : 'lots'}. Efficiency used for quoting: ${s.assumedEfficiency === null ? 'not set' : `${pct(s.assumedEfficiency)} %`}.${chart ? ` Mean measured ${chart.centre.toFixed(1)} %.` : ''}`}
             >
               {chart ? (
                 <ControlChart

@@ -7,6 +7,7 @@ import { buttonClasses } from '@/components/ui/button';
 import { Card } from '@/components/ui/card';
 import { Caution } from '@/components/ui/caution';
 import { EmptyState } from '@/components/ui/empty-state';
+import { FormMessage } from '@/components/ui/form-message';
 import { PageHeader } from '@/components/ui/page-header';
 import { can, requirePageUser } from '@/lib/auth/current-user';
 import { ESTIMATE_CAUTION } from '@/lib/plating';
@@ -25,8 +26,8 @@ export const metadata: Metadata = { title: 'Quote' };
 
 const UUID = /^[0-9a-f-]{36}$/i;
 
-export default async function QuotePage({ params }: { params: Promise<{ quoteId: string }> }) {
-  const { quoteId } = await params;
+export default async function QuotePage({ params, searchParams }: { params: Promise<{ quoteId: string }>; searchParams: Promise<{ sent?: string }> }) {
+  const [{ quoteId }, { sent }] = await Promise.all([params, searchParams]);
   const user = await requirePageUser('quotes.read', `/quotes/${quoteId}`);
   const quote = UUID.test(quoteId) ? await getQuote(quoteId) : null;
   if (!quote) notFound();
@@ -60,6 +61,11 @@ export default async function QuotePage({ params }: { params: Promise<{ quoteId:
           </>
         }
       />
+
+      {sent === 'ok' && status === 'sent' ? <FormMessage tone="success" message={`Sent to ${quote.contact_email} with the PDF attached.`} /> : null}
+      {sent === 'failed' && status === 'sent' ? (
+        <FormMessage tone="error" message='The quote is marked sent, but the e-mail could not be delivered. Use "E-mail again" once the mail server is reachable.' />
+      ) : null}
 
       <QuoteSummary quote={quote} />
 

@@ -59,6 +59,9 @@ export default async function WorkOrderPage({ params }: { params: Promise<{ work
             <a className={buttonClasses({ variant: 'secondary' })} href={`/api/work-orders/${wo.id}/traveler`} target="_blank" rel="noopener">
               Traveler PDF
             </a>
+            <LinkButton href={`/quality/orders/${wo.id}`} variant="secondary">
+              Quality record
+            </LinkButton>
           </>
         }
       />

@@ -31,6 +31,11 @@ export default async function LotQualityPage({ params }: { params: Promise<{ wor
   const checks = lotChecks(lot);
   const units = user.unitSystem;
   const o = lot.order;
+  const bake = req.required ? (
+    <BakeCard lot={lot} req={req} units={units} tz={tz} canRecord={can(user, 'quality.record')} canDisposition={can(user, 'quality.disposition')} now={now} />
+  ) : null;
+  // The bake cannot wait (its window runs from plating end); until it is recorded it comes first.
+  const bakeFirst = req.required && lot.bakes.length === 0;
 
   return (
     <div className="flex flex-col gap-5">
@@ -59,10 +64,9 @@ export default async function LotQualityPage({ params }: { params: Promise<{ wor
         }
       />
       <CertificateCard lot={lot} checks={checks} bath={bath} tz={tz} canIssue={can(user, 'certificates.issue')} />
+      {bakeFirst ? bake : null}
       <ThicknessCard lot={lot} t={t} units={units} tz={tz} canRecord={can(user, 'quality.record')} canVoid={can(user, 'quality.disposition')} open={OPEN_STATES.has(o.state)} />
-      {req.required ? (
-        <BakeCard lot={lot} req={req} units={units} tz={tz} canRecord={can(user, 'quality.record')} canDisposition={can(user, 'quality.disposition')} now={now} />
-      ) : null}
+      {req.required && !bakeFirst ? bake : null}
       <NonconformanceCard lot={lot} tz={tz} canOpen={can(user, 'quality.record')} canDisposition={can(user, 'quality.disposition')} />
     </div>
   );

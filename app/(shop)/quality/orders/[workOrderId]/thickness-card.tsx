@@ -1,19 +1,19 @@
 import { Card } from '@/components/ui/card';
 import { StatusBadge } from '@/components/ui/status-badge';
-import { Table, TBody, Td, Th, THead, Tr } from '@/components/ui/table';
 import type { UnitSystem } from '@/db/types';
 import { displayUnit, formatStoredQuantity, unitInfo } from '@/lib/plating';
 import { lotEfficiency } from '@/lib/quality/efficiency';
 import type { ThicknessState } from '@/lib/quality/lot-checks';
 import type { LotRecord } from '@/lib/quality/lot-types';
-import { formatShopTime } from '@/lib/quality/shop-time';
 import { CsvForm } from './csv-form';
 import { ReadingsForm } from './readings-form';
-import { VoidReadingForm } from './small-forms';
+import { ReadingsTable } from './readings-table';
 
 type Props = { lot: LotRecord; t: ThicknessState; units: UnitSystem; tz: string; canRecord: boolean; canVoid: boolean; open: boolean };
 
 const pct = (x: number) => `${(x * 100).toFixed(1)} %`;
+/** Up to this many readings show open; a longer list folds away, its failing readings shown apart. */
+const SHOW_OPEN = 20;
 
 export function ThicknessCard({ lot, t, units, tz, canRecord, canVoid, open }: Props) {
   const q = (um: number | null | undefined) => (um === null || um === undefined ? '—' : formatStoredQuantity(um, 'thickness', units));
@@ -24,6 +24,7 @@ export function ThicknessCard({ lot, t, units, tz, canRecord, canVoid, open }: P
   const unit = unitInfo(displayUnit('thickness', units)).symbol;
   const remaining = Math.max(t.sample.sampleSize - t.partsMeasured, 1);
   const firstPart = lot.readings.reduce((m, r) => Math.max(m, r.partNo), 0) + 1;
+  const table = (readings: LotRecord['readings']) => <ReadingsTable readings={readings} q={q} tz={tz} workOrderId={lot.order.id} canVoid={canVoid && open} />;
   return (
     <Card
       title="Thickness"
@@ -32,7 +33,7 @@ export function ThicknessCard({ lot, t, units, tz, canRecord, canVoid, open }: P
       <div className="flex flex-col gap-4">
         <p className="text-sm">
           <strong className="text-lg tabular">Measure {t.sample.sampleSize} parts</strong>{' '}
-          {t.sample.inspectAll ? `(every part of the lot of ${t.sample.lotSize})` : `from the lot of ${t.sample.lotSize} (code letter ${t.sample.codeLetter})`} ·{' '}
+          {t.sample.inspectAll ? `(every part of the lot of ${t.sample.lotSize.toLocaleString('en-US')})` : `from the lot of ${t.sample.lotSize.toLocaleString('en-US')} (code letter ${t.sample.codeLetter})`} ·{' '}
           <span className="text-ink-muted">
             {t.sample.planName} — {t.sample.source}
           </span>
@@ -66,46 +67,16 @@ export function ThicknessCard({ lot, t, units, tz, canRecord, canVoid, open }: P
         ) : eff ? (
           <p className="text-sm text-ink-muted">Current efficiency not computed: {eff.reason}</p>
         ) : null}
-        {lot.readings.length ? (
-          <Table dense caption="Readings" captionHidden>
-            <THead>
-              <tr>
-                <Th numeric>Part</Th>
-                <Th>Location</Th>
-                <Th>Method</Th>
-                <Th numeric>Thickness</Th>
-                <Th>Verdict</Th>
-                <Th>Recorded</Th>
-                {canVoid && open ? <Th>Void</Th> : null}
-              </tr>
-            </THead>
-            <TBody>
-              {lot.readings.map((r) => (
-                <Tr key={r.id}>
-                  <Td numeric>{r.partNo}</Td>
-                  <Td>{r.location}</Td>
-                  <Td>ASTM {r.method}</Td>
-                  <Td numeric>{q(r.thicknessUm)}</Td>
-                  <Td>
-                    {r.status === 'pass' ? (
-                      <StatusBadge status="ok" label="Conforms" size="sm" />
-                    ) : (
-                      <StatusBadge status="out" label={r.status === 'below_minimum' ? 'Below minimum' : 'Above maximum'} size="sm" />
-                    )}
-                  </Td>
-                  <Td className="text-xs text-ink-muted">
-                    {formatShopTime(r.recordedAt, tz)} · {r.recordedByName ?? '—'} {r.entry === 'csv' ? '· CSV' : ''}
-                  </Td>
-                  {canVoid && open ? (
-                    <Td>
-                      <VoidReadingForm workOrderId={lot.order.id} readingId={r.id} />
-                    </Td>
-                  ) : null}
-                </Tr>
-              ))}
-            </TBody>
-          </Table>
+        {lot.readings.length > SHOW_OPEN ? (
+          <details className="rounded-md border border-surface-line p-3">
+            <summary className="cursor-pointer font-medium">
+              All {lot.readings.length} readings{t.failing.length ? ` (${t.failing.length} failing, listed below)` : ''}
+            </summary>
+            <div className="pt-2">{table(lot.readings)}</div>
+          </details>
         ) : null}
+        {lot.readings.length > SHOW_OPEN && t.failing.length ? table(t.failing) : null}
+        {lot.readings.length && lot.readings.length <= SHOW_OPEN ? table(lot.readings) : null}
         {lot.voidedReadingCount ? <p className="text-xs text-ink-muted">{lot.voidedReadingCount} void readings are kept on record and not counted.</p> : null}
         {canRecord && open ? (
           <>

@@ -107,7 +107,7 @@ export function AnalysisEntry({ tank, analyte, system, correcting, prefill, addi
         ) : null}
         <div className="flex flex-wrap gap-3">
           <Button size="lg" variant="secondary" onClick={() => { setSaved(null); setText({}); }}>
-            Log another {analyte.name.toLowerCase()} reading
+            Log another reading
           </Button>
           <LinkButton size="lg" variant="ghost" href={`/floor/tanks/${tank.code}`}>
             Back to {tank.code}
