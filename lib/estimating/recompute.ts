@@ -1,7 +1,8 @@
 // The workbench's recompute: the form as typed → field errors, part geometry and the whole
 // calculation. The page calls it on every keystroke (in the browser) and the benchmark times it.
 // Pure and synchronous.
-import { PlatingInputError, type UnitSystem } from '@/lib/plating';
+import { PLATING_METALS, PlatingInputError, type UnitSystem } from '@/lib/plating';
+import { bakeFor, safetyNotes, type SafetyNote } from './safety';
 import type { CalculationInput } from './calculation-schema';
 import { computeCalculation, fieldErrorsOf, measureGeometry, type CalculationResult, type GeometryFigures } from './calculation';
 import { readForm, type FieldErrors } from './form-read';
@@ -35,8 +36,30 @@ export type WorkbenchView = {
   input: CalculationInput | null;
   result: CalculationResult | null;
   geometry: GeometryFigures | null; // shown even while the process fields have errors
+  // Cautions follow the metal and the part alone, so they stay up while other fields are wrong.
+  safety: SafetyNote[];
+  metalCaution: string | null;
   fieldErrors: FieldErrors;
 };
+
+function optionalNumber(text: string): number | null {
+  const n = Number(text.trim());
+  return text.trim() === '' || !Number.isFinite(n) ? null : n;
+}
+
+function cautionsOf(form: WorkbenchForm): Pick<WorkbenchView, 'safety' | 'metalCaution'> {
+  const metal = PLATING_METALS.find((m) => m.key === form.metalKey);
+  if (!metal) return { safety: [], metalCaution: null };
+  let bake = null;
+  try {
+    bake = bakeFor(form.substrate, optionalNumber(form.hardnessHrc), optionalNumber(form.tensileMpa));
+  } catch (e) {
+    if (!(e instanceof PlatingInputError)) throw e; // the hardness field shows the message
+  }
+  const safety = safetyNotes(metal.element, metal.charge, bake);
+  const said = safety.some((n) => n.detail === metal.caution);
+  return { safety, metalCaution: said ? null : metal.caution };
+}
 
 function engineErrors(e: unknown, form: WorkbenchForm): FieldErrors {
   if (!(e instanceof PlatingInputError)) throw e;
@@ -47,6 +70,7 @@ function engineErrors(e: unknown, form: WorkbenchForm): FieldErrors {
 
 export function recomputeWorkbench(form: WorkbenchForm, system: UnitSystem): WorkbenchView {
   const reading = readForm(form, system);
+  const cautions = cautionsOf(form);
   let geometry: GeometryFigures | null = null;
   let fieldErrors = reading.fieldErrors;
   if (reading.geometry) {
@@ -56,10 +80,10 @@ export function recomputeWorkbench(form: WorkbenchForm, system: UnitSystem): Wor
       fieldErrors = { ...fieldErrors, ...engineErrors(e, form) };
     }
   }
-  if (!reading.input || !geometry) return { input: null, result: null, geometry, fieldErrors };
+  if (!reading.input || !geometry) return { input: null, result: null, geometry, ...cautions, fieldErrors };
   try {
-    return { input: reading.input, result: computeCalculation(reading.input), geometry, fieldErrors };
+    return { input: reading.input, result: computeCalculation(reading.input), geometry, ...cautions, fieldErrors };
   } catch (e) {
-    return { input: null, result: null, geometry, fieldErrors: { ...fieldErrors, ...engineErrors(e, form) } };
+    return { input: null, result: null, geometry, ...cautions, fieldErrors: { ...fieldErrors, ...engineErrors(e, form) } };
   }
 }

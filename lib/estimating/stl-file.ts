@@ -5,6 +5,11 @@ import type { StlGeometry } from './calculation-schema';
 
 export type StlProgress = (bytesRead: number, totalBytes: number) => void;
 
+// A file already in memory streams without ever leaving the microtask queue, so the page would
+// not repaint its progress bar until the end; hand control back to the event loop this often.
+const YIELD_EVERY_MS = 30;
+const nextTask = () => new Promise<void>((resolve) => setTimeout(resolve, 0));
+
 export async function analyzeStlBlob(
   file: Blob,
   unit: StlUnit,
@@ -14,6 +19,7 @@ export async function analyzeStlBlob(
   const parser = new StlParser({ unit });
   const reader = file.stream().getReader();
   let read = 0;
+  let lastYield = Date.now();
   try {
     for (;;) {
       const { done, value } = await reader.read();
@@ -25,6 +31,10 @@ export async function analyzeStlBlob(
       parser.push(value);
       read += value.length;
       onProgress?.(read, file.size);
+      if (Date.now() - lastYield > YIELD_EVERY_MS) {
+        await nextTask();
+        lastYield = Date.now();
+      }
     }
   } finally {
     reader.releaseLock();

@@ -66,7 +66,7 @@ export async function seedBathExtras(db: Kysely<Database>, ctx: Context): Promis
     .values({
       tank_id: low.tank.id, analyte_id: low.analyte.id, analysis_id: analysis.id, kind: 'out_of_limits', state: 'acknowledged',
       dedupe_key: `out_of_limits:${low.analyte.id}`,
-      message: `${low.tank.code} ${low.tank.name}, ${low.analyte.name}: ${analysis.value} ${low.analyte.unit} is below the lower control limit (${low.analyte.lower_control}).`,
+      message: `${low.tank.code} ${low.tank.name}, ${low.analyte.name}: ${analysis.value.toPrecision(4)} ${low.analyte.unit} is below the lower control limit (${low.analyte.lower_control}).`,
       detail: JSON.stringify({ value: analysis.value }), raised_at: analysis.taken_at, last_seen_at: analysis.taken_at,
       acknowledged_at: ctx.at(ctx.excursion.day, 90), acknowledged_by: ctx.supervisor,
       corrective_action: 'Acid added as the calculator recommended; drag-in from the rinse reduced by a longer drip time. Re-analysed in range next day.',

@@ -34,11 +34,11 @@ describe('floor', () => {
       await page.getByRole('link', { name: /N-NI1/ }).click();
       await page.getByRole('link', { name: /Nickel metal/ }).click();
       await page.getByLabel('Burette reading').fill('15');
-      // Before saving: 15 mL × 2.935 = 44.02 g/L, below the 48.3 g/L lower control limit.
+      // Before saving: 15 mL × 2.935 = 44.02 g/L, below the demo's 45 g/L lower specification limit.
       const live = page.getByTestId('live-result');
       await expect(live.getByTestId('live-value').textContent()).resolves.toMatch(/44\.02\s*g\/L/);
       await expect(live.getByText('Out of range').count()).resolves.toBe(1);
-      await expect(live.getByText(/Below the lower control limit \(48\.3 g\/L\)/).count()).resolves.toBe(1);
+      await expect(live.getByText(/Below the lower specification limit \(45 g\/L\)/).count()).resolves.toBe(1);
       const advice = await live.getByTestId('recommendation').textContent();
       expect(advice).toMatch(/^Add \d+(\.\d+)? kg of Nickel sulfate hexahydrate\.$/);
       await screenshot(page, 'floor-nickel-out-of-range');

@@ -3,7 +3,7 @@
 import { Card } from '@/components/ui/card';
 import { Caution } from '@/components/ui/caution';
 import { SelectField } from '@/components/ui/field';
-import { CONTACT_LIMITS_V, ESTIMATE_CAUTION, GALVANIC_MATERIALS, STANDARD_POTENTIAL_SOURCE, type ServiceEnvironment } from '@/lib/plating';
+import { CONTACT_LIMITS_V, GALVANIC_MATERIALS, STANDARD_POTENTIAL_SOURCE, type ServiceEnvironment } from '@/lib/plating';
 import { formatValue } from '@/lib/estimating/format';
 import type { WorkbenchView } from '@/lib/estimating/recompute';
 import type { PanelProps } from './panel';
@@ -19,19 +19,17 @@ const volts = (v: number) => formatValue(v, 'V', 3);
 export function SafetyPanel(p: PanelProps & { view: WorkbenchView }) {
   const { form, set, view } = p;
   const result = view.result;
-  const said = new Set(result?.safety.map((n) => n.detail) ?? []);
-  const metalNotes = (result?.estimate.cautions ?? []).filter((c) => c !== ESTIMATE_CAUTION && !said.has(c));
   return (
     <Card title="Safety and corrosion" description="Cautions for this process and part, and how the coating behaves against the metals it touches.">
       <div className="flex flex-col gap-4">
-        {result?.safety.map((n) => (
+        {view.safety.map((n) => (
           <Caution key={n.kind} kind={n.kind}>
             {n.detail}
           </Caution>
         ))}
         <Caution kind="electrical" compact>
           {/* The metal's own hazard (e.g. nickel salts sensitise skin) when no caution above already says it. */}
-          {metalNotes.length ? metalNotes.join(' ') : null}
+          {view.metalCaution}
         </Caution>
 
         {result?.galvanic ? (

@@ -11,12 +11,18 @@ import { RefreshEvery } from './refresh-every';
 
 export const metadata: Metadata = { title: 'Bake windows' };
 
+const RECENT_MS = 12 * 3_600_000;
+
 /** The floor screen by the ovens: every plated lot still waiting for its relief bake, the closest window first. */
 export default async function BakeBoardPage() {
   await requirePageUser('quality.read', '/quality/bake-board');
-  const windows = await findOpenBakeWindows();
+  const all = await findOpenBakeWindows();
   const tz = shopTimeZone();
-  const now = new Date().toISOString();
+  const nowMs = Date.now();
+  const now = new Date(nowMs).toISOString();
+  // Cards for windows still open or closed within the last shift; older misses in a short list.
+  const windows = all.filter((w) => w.deadlineAt.getTime() > nowMs - RECENT_MS);
+  const stale = all.filter((w) => w.deadlineAt.getTime() <= nowMs - RECENT_MS);
   return (
     <div className="flex flex-col gap-5">
       <PageHeader title="Bake windows" description="Lots plated and waiting for their embrittlement-relief bake. The list refreshes itself every minute." />
@@ -43,6 +49,22 @@ export default async function BakeBoardPage() {
           ))}
         </ul>
       )}
+      {stale.length ? (
+        <section aria-label="Windows closed more than 12 hours ago without a bake record" className="text-sm">
+          <h2 className="font-semibold">Closed more than 12 h ago, no bake recorded ({stale.length})</h2>
+          <p className="text-ink-muted">Record the bake if it was done, or open a nonconformance for the lot.</p>
+          <ul className="mt-1 flex flex-wrap gap-x-4 gap-y-1">
+            {stale.slice(0, 50).map((w) => (
+              <li key={w.workOrderId}>
+                <Link className="font-mono" href={`/quality/orders/${w.workOrderId}`}>
+                  {w.number}
+                </Link>{' '}
+                <span className="text-ink-muted">closed {formatShopTime(w.deadlineAt, tz)}</span>
+              </li>
+            ))}
+          </ul>
+        </section>
+      ) : null}
     </div>
   );
 }

@@ -83,7 +83,7 @@ export function AnalysisEntry({ tank, analyte, system, correcting, prefill, addi
       ...(correcting ? { supersedesId: correcting.id, note: 'Correction' } : {}),
     };
     setSaved({ key, recommendation: result.recommendation });
-    void floorQueue().add({ key, payload, label: `${tank.code} · ${analyte.name} ${shown ? `${roundForDisplay(shown.value)} ${shown.unit}` : ''}` });
+    void floorQueue().add({ key, payload, label: `${tank.code} · ${analyte.name}: ${shown ? `${roundForDisplay(shown.value)} ${shown.unit}` : ''}` });
   }
 
   if (saved) {
