@@ -1,7 +1,9 @@
 import 'server-only';
-import type { Kysely } from 'kysely';
+import { sql, type Kysely } from 'kysely';
 import { db as defaultDb } from '@/db';
 import type { Database } from '@/db/types';
+import { AppError } from '@/lib/errors';
+import { assertBathPermission, type BathActor } from './access';
 
 // Shop settings for bath alerts, kept in the settings table under one key. The defaults are our
 // choice (common practice): escalate after 4 h unacknowledged, expect a recommended addition
@@ -24,4 +26,21 @@ export async function getBathSettings(executor: Kysely<Database> = defaultDb): P
     additionGraceHours: hours(v.additionGraceHours, BATH_SETTINGS_DEFAULTS.additionGraceHours),
     overdueGraceHours: hours(v.overdueGraceHours, BATH_SETTINGS_DEFAULTS.overdueGraceHours),
   };
+}
+
+export async function updateBathSettings(actor: BathActor, next: BathSettings, executor: Kysely<Database> = defaultDb): Promise<void> {
+  assertBathPermission(actor, 'settings.manage');
+  const checked: BathSettings = {
+    escalateAfterHours: hours(next.escalateAfterHours, Number.NaN),
+    additionGraceHours: hours(next.additionGraceHours, Number.NaN),
+    overdueGraceHours: hours(next.overdueGraceHours, Number.NaN),
+  };
+  const bad = (Object.keys(checked) as (keyof BathSettings)[]).filter((k) => Number.isNaN(checked[k]));
+  if (bad.length) throw new AppError('BAD_INPUT', 'Check the highlighted fields.', Object.fromEntries(bad.map((k) => [k, ['Give hours, more than 0 and at most 720.']])));
+  await executor
+    .insertInto('settings')
+    .values({ key: BATH_SETTINGS_KEY, value: JSON.stringify(checked) })
+    .onConflict((oc) => oc.column('key').doUpdateSet({ value: JSON.stringify(checked), updated_at: sql`now()` }))
+    .execute();
+  await executor.insertInto('audit_log').values({ actor_id: actor.id, action: 'bath_settings.update', entity: 'settings', entity_id: BATH_SETTINGS_KEY, detail: JSON.stringify(checked) }).execute();
 }

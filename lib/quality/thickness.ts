@@ -107,7 +107,10 @@ export async function recordReadings(
         ).id;
     }
     await audit(trx, actor, 'quality.readings.record', 'work_order', order.id, { count: judged.readings.length, failCount: judged.failCount, entry: input.entry, uploadId });
-    return { count: judged.readings.length, failCount: judged.failCount, message: judged.message, nonconformanceId };
+    const message = judged.allPass
+      ? `All ${judged.readings.length} readings meet the specification.`
+      : `${failureDescription(judged.readings, limits, finish.spec_text).replace(/^Thickness against [^:]*: /, '')}`;
+    return { count: judged.readings.length, failCount: judged.failCount, message, nonconformanceId };
   });
 }
 

@@ -140,7 +140,18 @@ export async function getPortalQuote(customerId: string, quoteId: string, conn: 
     .where('q.status', 'not in', ['draft', 'superseded'])
     .executeTakeFirst();
   if (!q) return null;
-  return { ...q, lines: await linesOf(conn, q.id) };
+  const [lines, workOrders] = await Promise.all([
+    linesOf(conn, q.id),
+    conn
+      .selectFrom('work_orders as w')
+      .innerJoin('quote_lines as l', 'l.id', 'w.quote_line_id')
+      .select(['w.id', 'w.number'])
+      .where('l.quote_id', '=', q.id)
+      .where('w.customer_id', '=', customerId)
+      .orderBy('w.number')
+      .execute(),
+  ]);
+  return { ...q, lines, workOrders };
 }
 
 export async function findPortalQuotes(customerId: string, conn: Db = defaultDb) {

@@ -42,7 +42,7 @@ describe('lot quality', () => {
       const values = ['9.6', '10.2', '7.4', '11.0', '10.8'];
       for (const [i, v] of values.entries()) await page.getByLabel(`Thickness in µm, part ${i + 1}`).fill(v);
       await page.getByRole('button', { name: 'Save 5 readings' }).click();
-      await page.getByText('A nonconformance is open for the lot.').waitFor();
+      await page.getByText('Saved 5 readings. 1 of 5 readings fail (1 below the minimum 8 µm). A nonconformance is open for the lot.').waitFor();
       await expect(page.getByText('Below minimum').count()).resolves.toBeGreaterThan(0);
       await screenshot(page, 'quality-plater-readings');
     } finally {
@@ -55,7 +55,7 @@ describe('lot quality', () => {
     try {
       await page.goto(`${APP_URL}/quality/bake-board`);
       const card = page.locator('li', { hasText: bakeLot.number });
-      await card.getByText(/59 min left|1 h 00 min left/).waitFor();
+      await card.getByText(/59 min left|1 h 00 min left/).first().waitFor();
       await screenshot(page, 'quality-bake-board');
     } finally {
       await page.context().close();
@@ -81,9 +81,11 @@ describe('lot quality', () => {
       await page.goto(`${APP_URL}/quality/orders/${ready.id}`);
       await screenshot(page, 'quality-lot-ready');
       await page.getByRole('button', { name: 'Sign and issue the certificate' }).click();
-      const done = page.getByText(/^Certificate CC\d{4}-\d{5} issued and signed by Priya Natarajan\.$/);
-      await done.waitFor({ timeout: 60_000 });
-      certificateNumber = /CC\d{4}-\d{5}/.exec((await done.textContent()) ?? '')![0];
+      // Once issued, the card shows the signed certificate in place of the button.
+      const issued = page.getByText(/^Issued CC\d{4}-\d{5}$/);
+      await issued.waitFor({ timeout: 60_000 });
+      certificateNumber = /CC\d{4}-\d{5}/.exec((await issued.textContent()) ?? '')![0];
+      await page.getByText(/^Signed by Priya Natarajan, /).waitFor();
       await page.getByRole('link', { name: 'Open the PDF' }).waitFor();
       await screenshot(page, 'quality-certificate-issued');
       // The button is gone: an issued certificate is not issued again.
@@ -99,7 +101,7 @@ describe('lot quality', () => {
     try {
       await page.getByRole('navigation').first().getByRole('link', { name: 'Certificates', exact: true }).click();
       await page.waitForURL(`${APP_URL}/portal/certificates`);
-      await page.getByRole('link', { name: certificateNumber }).click();
+      await page.getByRole('link', { name: certificateNumber, exact: true }).click();
       await page.getByRole('heading', { name: certificateNumber }).waitFor();
       await screenshot(page, 'quality-portal-certificate');
       const [download] = await Promise.all([page.waitForEvent('download'), page.getByRole('link', { name: 'Download the PDF' }).click()]);

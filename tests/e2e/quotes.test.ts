@@ -9,7 +9,7 @@ const BUYER = 'buyer@northgate-fastener.test';
 
 let browser: Browser;
 // Carried from one step of the story to the next.
-let quoteUrl = '';
+let quoteId = '';
 let quoteNumber = '';
 let workOrderNumber = '';
 const po = `PO-E2E-${Date.now().toString(36).toUpperCase()}`;
@@ -62,18 +62,18 @@ describe('quote to work order', () => {
       await page.getByLabel('Send to').selectOption({ label: `Glen Okafor <${BUYER}>` });
       await page.getByRole('button', { name: 'Send quote' }).click();
       await page.getByText(`Sent to ${BUYER} with the PDF attached.`).waitFor();
-      quoteUrl = page.url();
+      quoteId = new URL(page.url()).pathname.split('/').pop() ?? '';
       await screenshot(page, 'quote-sent');
     });
 
     const mail = await waitForMessage(BUYER, new RegExp(`Quotation ${quoteNumber}`), since);
     const link = firstLink(mail.text.slice(mail.text.indexOf('open:')));
-    expect(new URL(link).pathname).toBe(`/portal/quotes/${quoteUrl.split('/').pop()}`);
+    expect(new URL(link).pathname).toBe(`/portal/quotes/${quoteId}`);
   });
 
   it('[customer of another company] gets "not found" for that quote', async () => {
     await as('quality@halvorsen-valve.test', async (page) => {
-      const res = await page.goto(`${APP_URL}/portal/quotes/${quoteUrl.split('/').pop()}`);
+      const res = await page.goto(`${APP_URL}/portal/quotes/${quoteId}`);
       expect(res?.status()).toBe(404);
       expect(await page.content()).not.toContain(quoteNumber);
     });
@@ -82,7 +82,7 @@ describe('quote to work order', () => {
   it('[customer] accepts it with a PO number', async () => {
     const since = Date.now();
     await as(BUYER, async (page) => {
-      await page.goto(`${APP_URL}/portal/quotes/${quoteUrl.split('/').pop()}`);
+      await page.goto(`${APP_URL}/portal/quotes/${quoteId}`);
       await page.getByRole('heading', { name: quoteNumber }).waitFor();
       await screenshot(page, 'portal-quote-open');
       await page.getByLabel('Purchase-order number').fill(po);
@@ -147,7 +147,7 @@ describe('quote to work order', () => {
 
   it('[plater] cannot open the quotes', async () => {
     await as('plater@kestrel-plating.test', async (page) => {
-      const res = await page.goto(quoteUrl);
+      const res = await page.goto(`${APP_URL}/quotes/${quoteId}`);
       expect(res?.status()).toBe(403);
     });
   });

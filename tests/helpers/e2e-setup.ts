@@ -23,7 +23,18 @@ async function waitForHealth(timeoutMs: number): Promise<void> {
   throw new Error(`the app did not answer ${E2E_URL}/api/health within ${timeoutMs} ms`);
 }
 
+async function portAnswers(): Promise<boolean> {
+  try {
+    await fetch(`${E2E_URL}/api/health`, { signal: AbortSignal.timeout(1000) });
+    return true;
+  } catch {
+    return false;
+  }
+}
+
 export default async function setup(): Promise<() => Promise<void>> {
+  // Never test an old server left on the port: its build would not match this one.
+  if (await portAnswers()) throw new Error(`port ${E2E_PORT} is already in use; stop what runs there (an old 'next start'?) and run again`);
   await prepareTestDatabase();
   const root = path.resolve(__dirname, '../..');
   server = spawn(path.join(root, 'node_modules/.bin/next'), ['start', '-H', '127.0.0.1', '-p', String(E2E_PORT)], {
@@ -39,9 +50,17 @@ export default async function setup(): Promise<() => Promise<void>> {
       MAILBOX_URL: process.env.MAILBOX_URL ?? `http://127.0.0.1:${process.env.MAILBOX_PORT ?? 2581}`,
     },
     stdio: ['ignore', 'inherit', 'inherit'],
+    // Its own process group, so that stopping it also stops the next-server child it forks.
+    detached: true,
   });
   await waitForHealth(60_000);
   return async () => {
-    server?.kill('SIGTERM');
+    if (server?.pid) {
+      try {
+        process.kill(-server.pid, 'SIGTERM');
+      } catch {
+        // already gone
+      }
+    }
   };
 }

@@ -9,6 +9,7 @@ import { acknowledgeAlert } from '@/lib/bath/alerts';
 import { logAnalysis } from '@/lib/bath/log-analysis';
 import { recordAddition } from '@/lib/bath/record';
 import { checkMissingAdditions, checkOverdueAnalyses, escalateUnacknowledged } from '@/lib/bath/scheduled-checks';
+import { BATH_SETTINGS_DEFAULTS, BATH_SETTINGS_KEY, getBathSettings, updateBathSettings } from '@/lib/bath/settings';
 import { messagesTo } from '../../helpers/mailbox';
 import { actor, codeOf, key, makeTank, removeTank, type TestTank } from './fixtures';
 
@@ -108,5 +109,22 @@ describe('alerts', () => {
     expect(missing.map((a) => a.analyte_id)).toEqual([tank.analytes.nickel!.id]);
     await checkMissingAdditions(new Date());
     expect(await mine('addition_missing')).toHaveLength(1);
+  });
+
+  it('the owner sets the escalation time; a supervisor may not; a bad value is refused', async () => {
+    const owner = await actor('owner');
+    const before = await getBathSettings();
+    const stored = await db.selectFrom('settings').select('value').where('key', '=', BATH_SETTINGS_KEY).executeTakeFirst();
+    try {
+      expect(await codeOf(updateBathSettings(supervisor, { ...before, escalateAfterHours: 1 }))).toMatch(/^FORBIDDEN/);
+      expect(await codeOf(updateBathSettings(owner, { ...before, escalateAfterHours: 0 }))).toMatch(/^BAD_INPUT/);
+      await updateBathSettings(owner, { ...before, escalateAfterHours: 6 });
+      expect((await getBathSettings()).escalateAfterHours).toBe(6);
+    } finally {
+      // Put back what was there (nothing, in a fresh test database).
+      await db.deleteFrom('settings').where('key', '=', BATH_SETTINGS_KEY).execute();
+      if (stored) await db.insertInto('settings').values({ key: BATH_SETTINGS_KEY, value: JSON.stringify(stored.value) }).execute();
+    }
+    if (!stored) expect(await getBathSettings()).toEqual(BATH_SETTINGS_DEFAULTS);
   });
 });

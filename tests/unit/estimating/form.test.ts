@@ -94,6 +94,15 @@ describe('field messages', () => {
     expect(JSON.stringify(huge)).not.toMatch(/NaN|Infinity/);
   });
 
+  it('keeps the process cautions up while other fields are wrong', () => {
+    const view = recomputeWorkbench(metricForm({ metalKey: 'Ag1+', quantity: '', hardnessHrc: '40' }), 'metric');
+    expect(view.result).toBeNull();
+    // Source: ASTM B850 Table 1 (39–43 HRC: 14 h), reference §7; silver is plated from cyanide (reference §2).
+    expect(view.safety.map((n) => n.kind)).toEqual(['cyanide', 'high-strength-steel-bake']);
+    expect(view.metalCaution).toBeNull();
+    expect(recomputeWorkbench(metricForm(), 'metric').metalCaution).toMatch(/Nickel and cobalt salts are skin and respiratory sensitisers/);
+  });
+
   it('asks for an STL file when STL is chosen and none is measured', () => {
     expect(recomputeWorkbench(metricForm({ geometryMode: 'stl' }), 'metric').fieldErrors).toEqual({ stl: ['Choose an STL file of the part.'] });
   });

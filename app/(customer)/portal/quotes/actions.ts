@@ -1,6 +1,7 @@
 'use server';
 
 import { revalidatePath } from 'next/cache';
+import { redirect } from 'next/navigation';
 import { formAction } from '@/lib/action';
 import { getOwnCustomer } from '@/lib/customers/queries';
 import { acceptQuote, declineQuote } from '@/lib/quotes/lifecycle';
@@ -13,8 +14,8 @@ export const acceptQuoteAction = formAction('portal.use', acceptQuoteSchema, asy
   await emailEstimatorAccepted({ ...accepted, poNumber: input.poNumber, customerName: customer?.name ?? 'The customer' });
   revalidatePath('/portal/quotes');
   revalidatePath('/portal/orders');
-  const numbers = accepted.workOrders.map((w) => w.number).join(', ');
-  return { ok: true, message: `Thank you. Quote ${accepted.label} is accepted with PO ${input.poNumber}; our order${accepted.workOrders.length === 1 ? '' : 's'} ${numbers} ${accepted.workOrders.length === 1 ? 'is' : 'are'} open.` };
+  // The forms leave the page once the quote is decided, so the thank-you travels in the address.
+  redirect(`/portal/quotes/${input.quoteId}?done=accepted`);
 });
 
 export const declineQuoteAction = formAction('portal.use', declineQuoteSchema, async (input, user) => {
@@ -22,5 +23,5 @@ export const declineQuoteAction = formAction('portal.use', declineQuoteSchema, a
   const customer = await getOwnCustomer(user);
   await emailEstimatorDeclined({ ...declined, quoteId: input.quoteId, reason: input.reason, customerName: customer?.name ?? 'The customer' });
   revalidatePath('/portal/quotes');
-  return { ok: true, message: `Quote ${declined.label} is declined. Thank you for letting us know.` };
+  redirect(`/portal/quotes/${input.quoteId}?done=declined`);
 });

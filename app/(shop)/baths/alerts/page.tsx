@@ -10,6 +10,7 @@ import { formatWhen } from '@/lib/bath/display';
 import { ALERT_KIND_LABEL, ALERT_STATE_LABEL, findAlerts } from '@/lib/bath/alerts';
 import { getBathSettings } from '@/lib/bath/settings';
 import { AcknowledgeForm } from './ack-form';
+import { BathSettingsForm } from './settings-form';
 
 export const metadata: Metadata = { title: 'Bath alerts' };
 
@@ -60,6 +61,11 @@ export default async function BathAlertsPage() {
           </ul>
         )}
       </Card>
+      {can(user, 'settings.manage') ? (
+        <Card title="Alert timing" description="When alerts escalate, and how much grace the checks allow. Defaults: 4 h, 2 h and 1 h.">
+          <BathSettingsForm settings={settings} />
+        </Card>
+      ) : null}
     </div>
   );
 }

@@ -119,7 +119,7 @@ export function AdditionForm({ tank, analytes, defaults, system, title = 'Record
           errors={errors.amount}
           required
           className="flex-1"
-          inputClassName="text-2xl"
+          inputClassName="text-2xl!"
         />
         <SelectField size="lg" label="Unit" name="unit" value={unit} onChange={(e) => setUnit(e.target.value)} options={units.map((u) => ({ value: u, label: u }))} className="w-28" />
       </div>

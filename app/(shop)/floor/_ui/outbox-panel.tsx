@@ -27,7 +27,7 @@ export function OutboxPanel() {
   const waiting = entries.filter((e) => e.state === 'waiting');
   const failed = entries.filter((e) => e.state === 'failed');
   return (
-    <section aria-label="Entries on this device" aria-live="polite" className="flex flex-col gap-2">
+    <section aria-label="Entries on this device" aria-live="polite" className="flex flex-col gap-2 empty:hidden">
       {!online ? (
         <p className="flex items-center gap-2 rounded-md border border-near/40 bg-near-soft px-3 py-2 text-base font-medium text-ink">
           <StatusShape status="near" className="size-5 text-near" />

@@ -9,7 +9,6 @@ import { acceptQuoteAction, declineQuoteAction } from '../actions';
 
 export function AcceptForm({ quoteId }: { quoteId: string }) {
   const [state, action] = useActionState(acceptQuoteAction, initialFormState);
-  if (state.ok) return <FormMessage tone="success" message={state.message} />;
   return (
     <form action={action} className="grid gap-4 sm:grid-cols-2" noValidate>
       <input type="hidden" name="quoteId" value={quoteId} />
@@ -25,7 +24,6 @@ export function AcceptForm({ quoteId }: { quoteId: string }) {
 
 export function DeclineForm({ quoteId }: { quoteId: string }) {
   const [state, action] = useActionState(declineQuoteAction, initialFormState);
-  if (state.ok) return <FormMessage tone="success" message={state.message} />;
   return (
     <form action={action} className="flex flex-col gap-3" noValidate>
       <input type="hidden" name="quoteId" value={quoteId} />

@@ -5,6 +5,7 @@ import { Money } from '@/components/money';
 import { buttonClasses } from '@/components/ui/button';
 import { Card } from '@/components/ui/card';
 import { Caution } from '@/components/ui/caution';
+import { FormMessage } from '@/components/ui/form-message';
 import { PageHeader } from '@/components/ui/page-header';
 import { Table, TBody, TFoot, Td, Th, THead, Tr } from '@/components/ui/table';
 import { requirePageUser } from '@/lib/auth/current-user';
@@ -19,8 +20,8 @@ export const metadata: Metadata = { title: 'Quote' };
 
 const UUID = /^[0-9a-f-]{36}$/i;
 
-export default async function PortalQuotePage({ params }: { params: Promise<{ quoteId: string }> }) {
-  const { quoteId } = await params;
+export default async function PortalQuotePage({ params, searchParams }: { params: Promise<{ quoteId: string }>; searchParams: Promise<{ done?: string }> }) {
+  const [{ quoteId }, { done }] = await Promise.all([params, searchParams]);
   const user = await requirePageUser('portal.use', `/portal/quotes/${quoteId}`);
   // Another company's quote id finds nothing: the WHERE holds the contact's own company.
   const quote = UUID.test(quoteId) && user.customerId ? await getPortalQuote(user.customerId, quoteId) : null;
@@ -39,6 +40,13 @@ export default async function PortalQuotePage({ params }: { params: Promise<{ qu
           </a>
         }
       />
+      {done === 'accepted' && status === 'accepted' ? (
+        <FormMessage
+          tone="success"
+          message={`Thank you. Quote ${quoteLabel(quote)} is accepted with PO ${quote.po_number}; our order${quote.workOrders.length === 1 ? '' : 's'} ${quote.workOrders.map((w) => w.number).join(', ')} ${quote.workOrders.length === 1 ? 'is' : 'are'} open.`}
+        />
+      ) : null}
+      {done === 'declined' && status === 'declined' ? <FormMessage tone="success" message={`Quote ${quoteLabel(quote)} is declined. Thank you for letting us know.`} /> : null}
       <Card padding="none">
         <Table caption="Quote lines" captionHidden>
           <THead>
@@ -98,7 +106,8 @@ export default async function PortalQuotePage({ params }: { params: Promise<{ qu
         </div>
       ) : status === 'accepted' ? (
         <Card title="Accepted">
-          Accepted on {formatDateTime(quote.decided_at)} with PO {quote.po_number}. Follow the parts under <Link href="/portal/orders">Orders</Link>.
+          Accepted on {formatDateTime(quote.decided_at)} with PO {quote.po_number}: order{quote.workOrders.length === 1 ? '' : 's'}{' '}
+          {quote.workOrders.map((w) => w.number).join(', ')}. Follow the parts under <Link href="/portal/orders">Orders</Link>.
         </Card>
       ) : status === 'declined' ? (
         <Card title="Declined">Declined on {formatDateTime(quote.decided_at)}: {quote.decline_reason}</Card>

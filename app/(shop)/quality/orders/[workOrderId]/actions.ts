@@ -62,7 +62,7 @@ export const uploadReadingsCsvAction = formAction('quality.record', csvReadingsS
       defaultMethod: input.method ?? null,
     });
     refresh(input.workOrderId);
-    return { ok: r.failCount === 0, message: `Saved ${r.count} readings from ${file.name}. ${r.message}` };
+    return { ok: r.failCount === 0, message: `Saved ${r.count} readings from ${file.name}. ${r.message}${r.failCount ? ' A nonconformance is open for the lot.' : ''}` };
   } catch (err) {
     if (err instanceof CsvRejected) {
       return { ok: false, message: err.message, fieldErrors: { file: err.problems.map((p) => (p.row ? `Row ${p.row}${p.column ? `, ${p.column}` : ''}: ${p.message}` : p.message)) } };

@@ -80,12 +80,13 @@ export function ThicknessCard({ lot, t, units, tz, canRecord, canVoid, open }: P
         {lot.voidedReadingCount ? <p className="text-xs text-ink-muted">{lot.voidedReadingCount} void readings are kept on record and not counted.</p> : null}
         {canRecord && open ? (
           <>
-            <details open={lot.readings.length === 0} className="rounded-md border border-surface-line p-3">
-              <summary className="cursor-pointer font-medium">Enter readings by hand</summary>
+            {/* Not folded away: the save message must stay in view after the page refreshes. */}
+            <section aria-label="Enter readings by hand" className="rounded-md border border-surface-line p-3">
+              <h3 className="font-medium">Enter readings by hand</h3>
               <div className="pt-3">
                 <ReadingsForm workOrderId={lot.order.id} firstPartNo={firstPart} rows={remaining} unit={unit} minimumText={q(f.minThicknessUm)} />
               </div>
-            </details>
+            </section>
             <details className="rounded-md border border-surface-line p-3">
               <summary className="cursor-pointer font-medium">Upload an instrument's CSV</summary>
               <div className="pt-3">

@@ -26,7 +26,7 @@ export function HullCellForm({ tankId, tankCode, entryKey }: { tankId: string; t
       <input type="hidden" name="key" value={entryKey} />
       <div className="flex flex-col gap-1">
         <label htmlFor="photo" className="text-base font-medium text-ink">Photo of the panel (optional)</label>
-        <input id="photo" name="photo" type="file" accept="image/png,image/jpeg,image/webp" capture="environment" className="min-h-target text-base" />
+        <input id="photo" name="photo" type="file" accept="image/png,image/jpeg,image/webp" capture="environment" className="text-base file:mr-3 file:min-h-12 file:rounded-md file:border file:border-surface-line file:bg-surface file:px-4 file:font-medium" />
       </div>
       <NumberField size="lg" label="Cell current" name="currentA" unit="A" defaultValue={state.values?.currentA ?? '2'} errors={state.fieldErrors?.currentA} required />
       <NumberField size="lg" label="Plating time" name="minutes" unit="min" defaultValue={state.values?.minutes ?? '5'} errors={state.fieldErrors?.minutes} required />

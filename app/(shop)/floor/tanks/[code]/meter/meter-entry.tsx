@@ -63,7 +63,7 @@ export function MeterEntry({ tank, lastReading, doses, system }: Props) {
             value={text}
             onChange={(e) => setText(e.target.value)}
             errors={text && value === null ? 'Give the meter reading as a number, e.g. 125400.' : null}
-            inputClassName="text-3xl py-3"
+            inputClassName="text-3xl! py-3"
             autoFocus
           />
           {value !== null && lastReading ? (

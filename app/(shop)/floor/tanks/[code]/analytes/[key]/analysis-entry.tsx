@@ -127,7 +127,7 @@ export function AnalysisEntry({ tank, analyte, system, correcting, prefill, addi
       value={text[key] ?? ''}
       onChange={(e) => setText((t) => ({ ...t, [key]: e.target.value }))}
       errors={result && !result.ok && (result.field === key || (method.kind === 'direct' && result.field === 'reading')) ? result.message : null}
-      inputClassName="text-3xl py-3"
+      inputClassName="text-3xl! py-3"
       autoFocus={key === 'buretteMl' || key === 'reading'}
     />
   );
