@@ -75,7 +75,15 @@ const BATH_STATUS: Record<string, string> = { in_range: 'in range', near_limit: 
 
 export function BathSection({ k, c, at }: { k: Kit; c: CertificateContent; at: (t: string) => string }) {
   const { Text, View } = k;
-  const runs = c.runs.map((r) => `${r.tankCode} ${r.tankName} (ended ${at(r.endedAt)}, ${r.ampHours} A·h)`).join('; ');
+  // One line per tank: its runs' amp-hours together and when the last one ended.
+  const tanks = new Map<string, { name: string; runs: number; ampHours: number; lastEnd: string }>();
+  for (const r of c.runs) {
+    const t = tanks.get(r.tankCode) ?? { name: r.tankName, runs: 0, ampHours: 0, lastEnd: r.endedAt };
+    tanks.set(r.tankCode, { name: t.name, runs: t.runs + 1, ampHours: t.ampHours + r.ampHours, lastEnd: r.endedAt > t.lastEnd ? r.endedAt : t.lastEnd });
+  }
+  const runs = [...tanks]
+    .map(([code, t]) => `${code} ${t.name} (${t.runs} ${t.runs === 1 ? 'run' : 'runs'}, ${t.ampHours.toFixed(1)} A·h, last ended ${at(t.lastEnd)})`)
+    .join('; ');
   return (
     <View style={pdfStyles.section} wrap={false}>
       <Text style={pdfStyles.h2}>Plating and bath condition</Text>

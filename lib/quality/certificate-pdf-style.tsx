@@ -12,7 +12,10 @@ export const INK = '#1f2426';
 export const MUTED = '#5b6367';
 
 export const pdfStyles = {
-  page: { fontFamily: 'Plex Sans', fontSize: 9, color: INK, paddingTop: 36, paddingBottom: 48, paddingHorizontal: 40, lineHeight: 1.35 },
+  // Line height lives on the body (with its own font size, or rows double in height), not the page:
+  // on the page it hid the absolutely placed footer and its page numbers (seen with @react-pdf 4.9).
+  page: { fontFamily: 'Plex Sans', fontSize: 9, color: INK, paddingTop: 36, paddingBottom: 48, paddingHorizontal: 40 },
+  body: { lineHeight: 1.35, fontSize: 9 },
   shop: { fontSize: 14, fontWeight: 600, lineHeight: 1.25 },
   muted: { color: MUTED },
   rule: { borderBottomWidth: 2, borderBottomColor: TEAL, marginVertical: 8 },

@@ -41,72 +41,74 @@ export function CertificateDocument({ k, c }: { k: Kit; c: CertificateContent })
   return (
     <Document title={`Certificate of conformance ${c.number}`} author={c.shop.name} subject={`Work order ${c.order.number}`} creator="Ampwright">
       <Page size="LETTER" style={pdfStyles.page}>
-        <View style={{ flexDirection: 'row', justifyContent: 'space-between' }}>
-          <View>
-            <Text style={pdfStyles.shop}>{c.shop.name}</Text>
-            <Text style={pdfStyles.muted}>{[c.shop.address, c.shop.phone, c.shop.email].filter(Boolean).join('  ·  ')}</Text>
+        <View style={pdfStyles.body}>
+          <View style={{ flexDirection: 'row', justifyContent: 'space-between' }}>
+            <View>
+              <Text style={pdfStyles.shop}>{c.shop.name}</Text>
+              <Text style={pdfStyles.muted}>{[c.shop.address, c.shop.phone, c.shop.email].filter(Boolean).join('  ·  ')}</Text>
+            </View>
+            <View style={{ alignItems: 'flex-end' }}>
+              <Text style={pdfStyles.title}>Certificate of conformance</Text>
+              <Text style={pdfStyles.number}>{c.number}</Text>
+            </View>
           </View>
-          <View style={{ alignItems: 'flex-end' }}>
-            <Text style={pdfStyles.title}>Certificate of conformance</Text>
-            <Text style={pdfStyles.number}>{c.number}</Text>
+          <View style={pdfStyles.rule} />
+          <View style={pdfStyles.grid}>
+            <Fact k={k} label="Customer" value={`${c.customer.name} (${c.customer.code})`} />
+            <Fact k={k} label="Purchase order" value={c.order.poNumber} />
+            <Fact k={k} label="Part number" value={c.part.number} />
+            <Fact k={k} label="Revision" value={c.part.revision} />
+            <Fact k={k} label="Description" value={c.part.description} />
+            <Fact k={k} label="Quantity" value={`${c.order.quantity} pieces`} />
+            <Fact k={k} label="Work order" value={c.order.number} />
+            <Fact k={k} label="Substrate" value={c.part.substrate} />
+            <Fact k={k} label="Finish" value={`${c.finish.name} (${c.finish.code})`} />
+            <Fact k={k} label="Specification" value={c.finish.specText} />
           </View>
-        </View>
-        <View style={pdfStyles.rule} />
-        <View style={pdfStyles.grid}>
-          <Fact k={k} label="Customer" value={`${c.customer.name} (${c.customer.code})`} />
-          <Fact k={k} label="Purchase order" value={c.order.poNumber} />
-          <Fact k={k} label="Part number" value={c.part.number} />
-          <Fact k={k} label="Revision" value={c.part.revision} />
-          <Fact k={k} label="Description" value={c.part.description} />
-          <Fact k={k} label="Quantity" value={`${c.order.quantity} pieces`} />
-          <Fact k={k} label="Work order" value={c.order.number} />
-          <Fact k={k} label="Substrate" value={c.part.substrate} />
-          <Fact k={k} label="Finish" value={`${c.finish.name} (${c.finish.code})`} />
-          <Fact k={k} label="Specification" value={c.finish.specText} />
-        </View>
 
-        <View style={pdfStyles.section}>
-          <Text style={pdfStyles.h2}>Coating thickness</Text>
-          <Text>Requirement: {limits}.</Text>
-          <Text>
-            Sample: {t.partsMeasured} of {t.sampleSize} parts required from a lot of {t.lotSize}
-            {t.codeLetter ? ` (code letter ${t.codeLetter})` : ' (every part)'} per {t.planName}. Method: {t.methods.join(', ') || '—'}.
-          </Text>
-          <View style={[pdfStyles.grid, { marginTop: 3 }]}>
-            <Fact k={k} label="Readings" value={String(t.count)} />
-            <Fact k={k} label="Mean" value={um(t.meanUm)} />
-            <Fact k={k} label="Minimum" value={um(t.minUm)} />
-            <Fact k={k} label="Maximum" value={um(t.maxUm)} />
-            <Fact k={k} label="Std deviation" value={t.stdDevUm === null ? '— (one reading)' : um(t.stdDevUm)} />
-            <Fact k={k} label="Verdict" value={t.failingAcceptedByDisposition ? `${t.failingAcceptedByDisposition} failing ${t.failingAcceptedByDisposition === 1 ? 'reading' : 'readings'} accepted by disposition` : 'All readings conform'} />
+          <View style={pdfStyles.section}>
+            <Text style={pdfStyles.h2}>Coating thickness</Text>
+            <Text>Requirement: {limits}.</Text>
+            <Text>
+              Sample: {t.partsMeasured} of {t.sampleSize} parts required from a lot of {t.lotSize}
+              {t.codeLetter ? ` (code letter ${t.codeLetter})` : ' (every part)'} per {t.planName}. Method: {t.methods.join(', ') || '—'}.
+            </Text>
+            <View style={[pdfStyles.grid, { marginTop: 3 }]}>
+              <Fact k={k} label="Readings" value={String(t.count)} />
+              <Fact k={k} label="Mean" value={um(t.meanUm)} />
+              <Fact k={k} label="Minimum" value={um(t.minUm)} />
+              <Fact k={k} label="Maximum" value={um(t.maxUm)} />
+              <Fact k={k} label="Std deviation" value={t.stdDevUm === null ? '— (one reading)' : um(t.stdDevUm)} />
+              <Fact k={k} label="Verdict" value={t.failingAcceptedByDisposition ? `${t.failingAcceptedByDisposition} failing ${t.failingAcceptedByDisposition === 1 ? 'reading' : 'readings'} accepted by disposition` : 'All readings conform'} />
+            </View>
+            <ReadingsTable k={k} readings={t.readings} />
           </View>
-          <ReadingsTable k={k} readings={t.readings} />
-        </View>
 
-        <BakeSection k={k} c={c} at={at} />
-        <BathSection k={k} c={c} at={at} />
+          <BakeSection k={k} c={c} at={at} />
+          <BathSection k={k} c={c} at={at} />
 
-        {c.nonconformances.length ? (
+          {c.nonconformances.length ? (
+            <View style={pdfStyles.section} wrap={false}>
+              <Text style={pdfStyles.h2}>Nonconformances on this lot</Text>
+              {c.nonconformances.map((n, i) => (
+                <Text key={i}>
+                  {n.description} Disposition: {n.disposition}
+                  {n.customerApprovalRef ? `, customer approval ${n.customerApprovalRef}` : ''}
+                  {n.closedAt ? `, closed ${at(n.closedAt)}` : ''}.
+                </Text>
+              ))}
+            </View>
+          ) : null}
+
           <View style={pdfStyles.section} wrap={false}>
-            <Text style={pdfStyles.h2}>Nonconformances on this lot</Text>
-            {c.nonconformances.map((n, i) => (
-              <Text key={i}>
-                {n.description} Disposition: {n.disposition}
-                {n.customerApprovalRef ? `, customer approval ${n.customerApprovalRef}` : ''}
-                {n.closedAt ? `, closed ${at(n.closedAt)}` : ''}.
-              </Text>
-            ))}
+            <Text>{c.statement}</Text>
+            <View style={pdfStyles.signature}>
+              <Fact k={k} label="Signed" value={`${c.signedBy.name}, ${c.signedBy.role}`} />
+              <Fact k={k} label="Date" value={at(c.signedAt)} />
+            </View>
           </View>
-        ) : null}
 
-        <View style={pdfStyles.section} wrap={false}>
-          <Text>{c.statement}</Text>
-          <View style={pdfStyles.signature}>
-            <Fact k={k} label="Signed" value={`${c.signedBy.name}, ${c.signedBy.role}`} />
-            <Fact k={k} label="Date" value={at(c.signedAt)} />
-          </View>
         </View>
-
         <View style={pdfStyles.footer} fixed>
           <Text>
             {c.number} · work order {c.order.number} · PO {c.order.poNumber}

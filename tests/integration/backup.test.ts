@@ -1,15 +1,22 @@
-// Backup and restore: a dump of the seeded test database restored into a new, empty database
-// holds the same rows (counts and a checksum per table).
+// Backup and restore: a dump of a freshly seeded database, restored into a new, empty database,
+// holds the same rows (counts and a checksum per table). The source is a database of its own so
+// that no other test writes to it between the dump and the comparison.
 import { execFileSync } from 'node:child_process';
 import { mkdtempSync, rmSync } from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
 import pg from 'pg';
-import { afterAll, describe, expect, it } from 'vitest';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { createDb } from '@/db/kysely';
+import { migrateToLatest } from '@/db/migrate';
+import { createPool } from '@/db/pool';
+import { seedDemo } from '@/lib/seed';
 
-const url = process.env.DATABASE_URL!;
+const server = process.env.DATABASE_URL!.slice(0, process.env.DATABASE_URL!.lastIndexOf('/'));
+const sourceName = `ampwright_backup_src_${process.pid}`;
+const url = `${server}/${sourceName}`;
 const restoredName = `ampwright_restore_${process.pid}`;
-const restoredUrl = `${url.slice(0, url.lastIndexOf('/'))}/${restoredName}`;
+const restoredUrl = `${server}/${restoredName}`;
 const script = path.resolve(__dirname, '../../docker-free-scripts/backup.sh');
 const dir = mkdtempSync(path.join(os.tmpdir(), 'ampwright-backup-'));
 
@@ -34,12 +41,32 @@ async function fingerprint(connectionString: string): Promise<Record<string, str
   }
 }
 
+async function admin(sqlText: string): Promise<void> {
+  const client = new pg.Client({ connectionString: `${server}/postgres` });
+  await client.connect();
+  try {
+    await client.query(sqlText);
+  } finally {
+    await client.end();
+  }
+}
+
+beforeAll(async () => {
+  await admin(`create database "${sourceName}"`);
+  const db = createDb(createPool(url));
+  try {
+    const { error } = await migrateToLatest(db);
+    if (error) throw error;
+    await seedDemo(db);
+  } finally {
+    await db.destroy();
+  }
+}, 120_000);
+
 afterAll(async () => {
   rmSync(dir, { recursive: true, force: true });
-  const admin = new pg.Client({ connectionString: `${url.slice(0, url.lastIndexOf('/'))}/postgres` });
-  await admin.connect();
-  await admin.query(`drop database if exists "${restoredName}" with (force)`);
-  await admin.end();
+  await admin(`drop database if exists "${restoredName}" with (force)`);
+  await admin(`drop database if exists "${sourceName}" with (force)`);
 });
 
 describe('backup and restore', () => {

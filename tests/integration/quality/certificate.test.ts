@@ -93,7 +93,7 @@ describe('an issued certificate', () => {
     // Readings 9, 10, 11, 12, 9 µm: mean 51/5 = 10.2 (hand computed).
     expect(c.thickness.meanUm).toBeCloseTo(10.2, 10);
     expect(c.bath.available).toBe(true);
-    expect(c.runs[0]).toMatchObject({ tankCode: 'Z-ZN1', ampHours: 12 });
+    expect(c.runs[0]).toMatchObject({ tankCode: 'Z-ZN1' });
 
     const pdf = await db.selectFrom('files').select(['bytes', 'content_type', 'name']).where('id', '=', cert.pdfFileId).executeTakeFirstOrThrow();
     expect(pdf.content_type).toBe('application/pdf');
