@@ -21,12 +21,14 @@ export function formValues(formData: FormData): Record<string, string> {
 }
 
 export function zodFieldErrors(error: z.ZodError): Record<string, string[]> {
-  const out: Record<string, string[]> = {};
+  // A Map, so a field named like an Object method (valueOf, constructor) is just a key;
+  // fromEntries gives a plain object with own properties only.
+  const out = new Map<string, string[]>();
   for (const issue of error.issues) {
     const key = issue.path.length ? issue.path.join('.') : '_form';
-    (out[key] ??= []).push(issue.message);
+    out.set(key, [...(out.get(key) ?? []), issue.message]);
   }
-  return out;
+  return Object.fromEntries(out);
 }
 
 export function errorToFormState(err: unknown, values?: Record<string, string>): FormState {

@@ -25,7 +25,10 @@ export const DISTRIBUTION_RATIO_DEFAULTS: Readonly<Record<Loading, number>> = Ob
 export function averageThicknessUm(minimumUm: number, distributionRatio: number): number {
   const min = requirePositive('minimumThicknessUm', 'Minimum thickness (µm)', minimumUm);
   const r = requireFraction('distributionRatio', 'Distribution ratio (minimum ÷ average)', distributionRatio);
-  return min / r;
+  const average = min / r;
+  // A vanishingly small ratio would divide to Infinity: refuse it here, where the division is.
+  requireFiniteResults({ averageThicknessUm: average }, { minimumThicknessUm: min, distributionRatio: r });
+  return average;
 }
 
 export type LoadPlanInput = {
