@@ -17,7 +17,7 @@ export function isDatabaseUnavailable(err: unknown): boolean {
   for (let e = err as { code?: string; message?: string; cause?: unknown } | undefined, i = 0; e && i < 5; i++) {
     if (e.code && UNAVAILABLE_CODES.has(e.code)) return true;
     const m = e.message ?? '';
-    if (/timeout exceeded when trying to connect|Connection terminated|connect ECONNREFUSED/i.test(m)) return true;
+    if (/timeout exceeded when trying to connect|Connection terminated|connect ECONNREFUSED|not queryable|Client was closed/i.test(m)) return true;
     if (e instanceof AggregateError) return e.errors.some(isDatabaseUnavailable);
     e = e.cause as typeof e;
   }

@@ -18,7 +18,10 @@ export function createPool(url = databaseUrl()): pg.Pool {
     idleTimeoutMillis: 30_000,
     statement_timeout: 15_000,
   });
-  // An idle client losing its connection (database restart) must not crash the process.
+  // A client losing its connection (database stopped or restarted) must not crash the process:
+  // the pool reports idle ones; a checked-out one reports on itself, and the query that was using
+  // it fails (503). Either way the pool drops the client and connects afresh when the database is back.
   pool.on('error', (err) => console.error('[db] idle client error:', err.message));
+  pool.on('connect', (client) => client.on('error', (err) => console.error('[db] client error:', err.message)));
   return pool;
 }

@@ -6,8 +6,8 @@ import { seedDemo } from '@/lib/seed';
 
 export const TEST_DATABASE_URL = process.env.TEST_DATABASE_URL ?? 'postgres://app@127.0.0.1:54329/ampwright_test';
 
-export async function prepareTestDatabase(): Promise<void> {
-  const db = createDb(createPool(TEST_DATABASE_URL));
+export async function prepareTestDatabase(url: string = TEST_DATABASE_URL): Promise<void> {
+  const db = createDb(createPool(url));
   try {
     const { error } = await migrateToLatest(db);
     if (error) throw error;
