@@ -7,6 +7,7 @@ import {
   bathMetalGPerL,
   DEFAULT_DRAG_OUT_L_PER_M2,
   DEFAULT_RECTIFIER_EFFICIENCY,
+  finishProcess,
   processForFinish,
   type TankFacts,
 } from '@/lib/quotes/process';
@@ -59,16 +60,7 @@ export type FinishFacts = {
 };
 
 export function libraryProcessFrom(finish: FinishFacts, tanks: readonly TankFacts[]): LibraryProcess {
-  const base = {
-    element: finish.element,
-    charge: finish.ionCharge,
-    currentDensityAdm2: finish.currentDensityAdm2,
-    efficiency: finish.efficiency,
-    loading: finish.method,
-    distributionRatio: finish.distributionRatio,
-    partsPerLoad: finish.partsPerLoad,
-    tankVolts: finish.tankVolts,
-  };
+  const base = finishProcess(finish);
   let tankCode: string | null = null;
   let note: string | null = null;
   let shop: Omit<JobProcess, keyof typeof base>;

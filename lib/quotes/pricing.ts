@@ -10,6 +10,7 @@ import { estimateJob, PlatingInputError, type JobEstimate } from '@/lib/plating'
 import type { PricingBasis } from '@/db/types';
 import { basisQuantity, roundUnitCents, unitPriceCents, type BasisFacts } from './basis';
 import { bakeDecision, type BakeDecision } from './bake-rule';
+import { finishProcess } from './process';
 
 export type PricedPart = { areaDm2: number; weightG: number | null; hardnessHrc: number | null; tensileMpa: number | null };
 
@@ -160,22 +161,7 @@ function estimateFor(input: PricingInput): JobEstimate {
     areaPerPartDm2: part.areaDm2,
     quantity: input.quantity,
     minimumThicknessUm: finish.minThicknessUm,
-    process: {
-      element: finish.element,
-      charge: finish.ionCharge,
-      currentDensityAdm2: finish.currentDensityAdm2,
-      efficiency: finish.efficiency,
-      loading: finish.method,
-      distributionRatio: finish.distributionRatio,
-      partsPerLoad: finish.partsPerLoad,
-      tankVolts: finish.tankVolts,
-      rectifierMaxA: process.rectifierMaxA,
-      rectifierEfficiency: process.rectifierEfficiency,
-      dragOutLPerM2: process.dragOutLPerM2,
-      bathMetalGPerL: process.bathMetalGPerL,
-      anodes: process.anodes,
-      anodeLossPercent: process.anodeLossPercent,
-    },
+    process: { ...finishProcess(finish), ...process },
   });
 }
 

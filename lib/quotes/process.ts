@@ -3,8 +3,8 @@
 // Pure: the caller passes the tanks.
 import { metalFraction } from '@/lib/chemistry/formula';
 import { getTemplate } from '@/lib/bath/templates';
-import { PlatingInputError } from '@/lib/plating';
-import type { ShopProcess } from './pricing';
+import { PlatingInputError, type JobProcess } from '@/lib/plating';
+import type { PricedFinish, ShopProcess } from './pricing';
 
 // Common practice (reference §11, from memory): rectifiers run at about 75–95 % efficiency;
 // 0.85 is the reference's worked example.
@@ -45,6 +45,22 @@ export function bathMetalGPerL(templateId: string, element: string): number {
   const salt = SALT_ANALYTE[element];
   const saltRow = salt ? template.analytes.find((a) => a.key === salt.key && a.unit === 'g/L') : undefined;
   return salt && saltRow ? saltRow.target * metalFraction(salt.formula, element) : 0;
+}
+
+export type FinishProcessFacts = Pick<PricedFinish, 'element' | 'ionCharge' | 'method' | 'currentDensityAdm2' | 'efficiency' | 'distributionRatio' | 'partsPerLoad' | 'tankVolts'>;
+
+/** The engine's process fields a finish fixes; the shop's tank supplies the rest (ShopProcess). */
+export function finishProcess(finish: FinishProcessFacts) {
+  return {
+    element: finish.element,
+    charge: finish.ionCharge,
+    currentDensityAdm2: finish.currentDensityAdm2,
+    efficiency: finish.efficiency,
+    loading: finish.method,
+    distributionRatio: finish.distributionRatio,
+    partsPerLoad: finish.partsPerLoad,
+    tankVolts: finish.tankVolts,
+  } satisfies Partial<JobProcess>;
 }
 
 /** Active tanks that deposit the finish's metal, those on the finish's own line first. */

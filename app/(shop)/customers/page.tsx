@@ -1,5 +1,5 @@
 import type { Metadata } from 'next';
-import { LinkButton } from '@/components/ui/button';
+import { ImportNewActions } from '@/components/ui/import-new-actions';
 import { PageHeader } from '@/components/ui/page-header';
 import { can, requirePageUser } from '@/lib/auth/current-user';
 import { CustomerGrid } from './customer-grid';
@@ -14,16 +14,7 @@ export default async function CustomersPage() {
       <PageHeader
         title="Customers"
         description="Companies the shop plates for, with their billing details and contacts."
-        actions={
-          mayWrite ? (
-            <>
-              <LinkButton href="/customers/import" variant="secondary">
-                Import from CSV
-              </LinkButton>
-              <LinkButton href="/customers/new">New customer</LinkButton>
-            </>
-          ) : null
-        }
+        actions={mayWrite ? <ImportNewActions base="/customers" newLabel="New customer" /> : null}
       />
       <CustomerGrid />
     </div>

@@ -6,7 +6,7 @@ import { Card } from '@/components/ui/card';
 import { cautionTexts } from '@/components/ui/caution';
 import { EmptyState } from '@/components/ui/empty-state';
 import { PageHeader } from '@/components/ui/page-header';
-import { Table, TBody, Td, Th, THead, Tr } from '@/components/ui/table';
+import { SimpleTable } from '@/components/ui/simple-table';
 import { can, requirePageUser } from '@/lib/auth/current-user';
 import { finishHazards } from '@/lib/finishes/hazards';
 import { findFinishes } from '@/lib/finishes/queries';
@@ -25,50 +25,49 @@ export default async function FinishesPage() {
         actions={can(user, 'quotes.write') ? <LinkButton href="/finishes/new">New finish</LinkButton> : null}
       />
       <Card padding="none">
-        {finishes.length === 0 ? (
-          <EmptyState title="No finishes yet" />
-        ) : (
-          <Table caption="Finishes" captionHidden>
-            <THead>
-              <Tr>
-                <Th>Code</Th>
-                <Th>Name and specification</Th>
-                <Th>Metal</Th>
-                <Th numeric>Minimum</Th>
-                <Th>Method</Th>
-                <Th>Cautions</Th>
-              </Tr>
-            </THead>
-            <TBody>
-              {finishes.map((f) => (
-                <Tr key={f.id} className={f.is_active ? undefined : 'text-ink-muted'}>
-                  <Td>
-                    <Link href={`/finishes/${f.id}`}>{f.code}</Link>
-                    {f.is_active ? null : (
-                      <Badge tone="outline" className="ml-2">
-                        retired
-                      </Badge>
-                    )}
-                  </Td>
-                  <Td>
-                    {f.name}
-                    {f.spec_text ? <div className="text-xs text-ink-muted">{f.spec_text}</div> : null}
-                  </Td>
-                  <Td>{findMetal(f.element, f.ion_charge)?.ion ?? f.element}</Td>
-                  <Td numeric>{formatStoredQuantity(f.min_thickness_um, 'thickness', user.unitSystem)}</Td>
-                  <Td>{f.method}</Td>
-                  <Td>
-                    {finishHazards({ element: f.element, ionCharge: f.ion_charge, route: f.process_route, bakeRequired: f.bake_required }).map((k) => (
-                      <Badge key={k} tone="copper" className="mr-1">
-                        {cautionTexts[k].title}
-                      </Badge>
-                    ))}
-                  </Td>
-                </Tr>
-              ))}
-            </TBody>
-          </Table>
-        )}
+        <SimpleTable
+          caption="Finishes"
+          rows={finishes}
+          rowKey={(f) => f.id}
+          empty={<EmptyState title="No finishes yet" />}
+          rowAttributes={(f) => ({ className: f.is_active ? undefined : 'text-ink-muted' })}
+          columns={[
+            {
+              header: 'Code',
+              cell: (f) => (
+                <>
+                  <Link href={`/finishes/${f.id}`}>{f.code}</Link>
+                  {f.is_active ? null : (
+                    <Badge tone="outline" className="ml-2">
+                      retired
+                    </Badge>
+                  )}
+                </>
+              ),
+            },
+            {
+              header: 'Name and specification',
+              cell: (f) => (
+                <>
+                  {f.name}
+                  {f.spec_text ? <div className="text-xs text-ink-muted">{f.spec_text}</div> : null}
+                </>
+              ),
+            },
+            { header: 'Metal', cell: (f) => findMetal(f.element, f.ion_charge)?.ion ?? f.element },
+            { header: 'Minimum', numeric: true, cell: (f) => formatStoredQuantity(f.min_thickness_um, 'thickness', user.unitSystem) },
+            { header: 'Method', cell: (f) => f.method },
+            {
+              header: 'Cautions',
+              cell: (f) =>
+                finishHazards({ element: f.element, ionCharge: f.ion_charge, route: f.process_route, bakeRequired: f.bake_required }).map((k) => (
+                  <Badge key={k} tone="copper" className="mr-1">
+                    {cautionTexts[k].title}
+                  </Badge>
+                )),
+            },
+          ]}
+        />
       </Card>
     </div>
   );

@@ -1,5 +1,5 @@
 import type { Metadata } from 'next';
-import { LinkButton } from '@/components/ui/button';
+import { ImportNewActions } from '@/components/ui/import-new-actions';
 import { PageHeader } from '@/components/ui/page-header';
 import { can, requirePageUser } from '@/lib/auth/current-user';
 import { PartGrid } from './part-grid';
@@ -14,16 +14,7 @@ export default async function PartsPage() {
       <PageHeader
         title="Parts"
         description="Customers’ parts with their substrate, strength and plating area."
-        actions={
-          mayWrite ? (
-            <>
-              <LinkButton href="/parts/import" variant="secondary">
-                Import from CSV
-              </LinkButton>
-              <LinkButton href="/parts/new">New part</LinkButton>
-            </>
-          ) : null
-        }
+        actions={mayWrite ? <ImportNewActions base="/parts" newLabel="New part" /> : null}
       />
       <PartGrid unitSystem={user.unitSystem} />
     </div>

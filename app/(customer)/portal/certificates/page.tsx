@@ -1,9 +1,8 @@
 import type { Metadata } from 'next';
 import Link from 'next/link';
-import { Card } from '@/components/ui/card';
 import { EmptyState } from '@/components/ui/empty-state';
 import { PageHeader } from '@/components/ui/page-header';
-import { Table, TBody, Td, Th, THead, Tr } from '@/components/ui/table';
+import { SimpleTable } from '@/components/ui/simple-table';
 import { requirePageUser } from '@/lib/auth/current-user';
 import { findCustomerCertificates } from '@/lib/quality/certificates';
 import { formatShopDate, shopTimeZone } from '@/lib/quality/shop-time';
@@ -18,49 +17,43 @@ export default async function PortalCertificatesPage() {
   return (
     <div className="flex flex-col gap-6">
       <PageHeader title="Certificates" description="Certificates of conformance for your lots, as signed and issued. Open one to see its summary or download the PDF." />
-      {certificates.length === 0 ? (
-        <EmptyState title="No certificates yet" description="When a lot of yours has passed inspection and its certificate is signed, it appears here to download." />
-      ) : (
-        <Card padding="none">
-          <Table caption="Certificates" captionHidden>
-            <THead>
-              <tr>
-                <Th>Certificate</Th>
-                <Th>Your PO</Th>
-                <Th>Part</Th>
-                <Th>Work order</Th>
-                <Th>Signed</Th>
-                <Th>PDF</Th>
-              </tr>
-            </THead>
-            <TBody>
-              {certificates.map((c) => (
-                <Tr key={c.id}>
-                  <Td>
-                    <Link className="font-mono" href={`/portal/certificates/${c.id}`}>
-                      {c.number}
-                    </Link>
-                  </Td>
-                  <Td>{c.po_number}</Td>
-                  <Td>
-                    <span className="font-mono">{c.part_number}</span>
-                    {c.revision ? ` rev ${c.revision}` : ''}
-                  </Td>
-                  <Td className="font-mono">{c.work_order_number}</Td>
-                  <Td>
-                    {formatShopDate(c.signed_at, tz)} · {c.signed_by_name}
-                  </Td>
-                  <Td>
-                    <a href={`/api/portal/certificates/${c.id}?download=1`} aria-label={`Download ${c.number} as PDF`}>
-                      Download
-                    </a>
-                  </Td>
-                </Tr>
-              ))}
-            </TBody>
-          </Table>
-        </Card>
-      )}
+      <SimpleTable
+        framed
+        caption="Certificates"
+        rows={certificates}
+        rowKey={(c) => c.id}
+        empty={<EmptyState title="No certificates yet" description="When a lot of yours has passed inspection and its certificate is signed, it appears here to download." />}
+        columns={[
+          {
+            header: 'Certificate',
+            cell: (c) => (
+              <Link className="font-mono" href={`/portal/certificates/${c.id}`}>
+                {c.number}
+              </Link>
+            ),
+          },
+          { header: 'Your PO', cell: (c) => c.po_number },
+          {
+            header: 'Part',
+            cell: (c) => (
+              <>
+                <span className="font-mono">{c.part_number}</span>
+                {c.revision ? ` rev ${c.revision}` : ''}
+              </>
+            ),
+          },
+          { header: 'Work order', className: 'font-mono', cell: (c) => c.work_order_number },
+          { header: 'Signed', cell: (c) => `${formatShopDate(c.signed_at, tz)} · ${c.signed_by_name}` },
+          {
+            header: 'PDF',
+            cell: (c) => (
+              <a href={`/api/portal/certificates/${c.id}?download=1`} aria-label={`Download ${c.number} as PDF`}>
+                Download
+              </a>
+            ),
+          },
+        ]}
+      />
     </div>
   );
 }

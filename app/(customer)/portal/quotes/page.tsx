@@ -4,7 +4,7 @@ import { Money } from '@/components/money';
 import { Card } from '@/components/ui/card';
 import { EmptyState } from '@/components/ui/empty-state';
 import { PageHeader } from '@/components/ui/page-header';
-import { Table, TBody, Td, Th, THead, Tr } from '@/components/ui/table';
+import { SimpleTable } from '@/components/ui/simple-table';
 import { requirePageUser } from '@/lib/auth/current-user';
 import { formatDay } from '@/lib/quotes/format';
 import { findPortalQuotes } from '@/lib/quotes/queries';
@@ -35,40 +35,27 @@ export default async function PortalQuotesPage() {
 function QuoteTable({ caption, rows }: { caption: string; rows: Awaited<ReturnType<typeof findPortalQuotes>> }) {
   return (
     <Card title={caption} padding="none">
-      <Table caption={caption} captionHidden>
-        <THead>
-          <tr>
-            <Th>Quote</Th>
-            <Th>Status</Th>
-            <Th numeric>Lines</Th>
-            <Th numeric>Total</Th>
-            <Th>Sent</Th>
-            <Th>Valid until</Th>
-            <Th>Your PO</Th>
-          </tr>
-        </THead>
-        <TBody>
-          {rows.map((q) => (
-            <Tr key={q.id}>
-              <Td>
-                <Link href={`/portal/quotes/${q.id}`} className="font-mono">
-                  {quoteLabel(q)}
-                </Link>
-              </Td>
-              <Td>
-                <PortalQuoteStatus status={q.status} />
-              </Td>
-              <Td numeric>{q.line_count}</Td>
-              <Td numeric>
-                <Money cents={q.total_cents} />
-              </Td>
-              <Td>{formatDay(q.sent_at)}</Td>
-              <Td>{formatDay(q.expires_at)}</Td>
-              <Td>{q.po_number ?? ''}</Td>
-            </Tr>
-          ))}
-        </TBody>
-      </Table>
+      <SimpleTable
+        caption={caption}
+        rows={rows}
+        rowKey={(q) => q.id}
+        columns={[
+          {
+            header: 'Quote',
+            cell: (q) => (
+              <Link href={`/portal/quotes/${q.id}`} className="font-mono">
+                {quoteLabel(q)}
+              </Link>
+            ),
+          },
+          { header: 'Status', cell: (q) => <PortalQuoteStatus status={q.status} /> },
+          { header: 'Lines', numeric: true, cell: (q) => q.line_count },
+          { header: 'Total', numeric: true, cell: (q) => <Money cents={q.total_cents} /> },
+          { header: 'Sent', cell: (q) => formatDay(q.sent_at) },
+          { header: 'Valid until', cell: (q) => formatDay(q.expires_at) },
+          { header: 'Your PO', cell: (q) => q.po_number ?? '' },
+        ]}
+      />
     </Card>
   );
 }

@@ -3,7 +3,7 @@ import { formatBathValue } from '@/components/bath/bath-value';
 import { VerdictBadge } from '@/components/bath/verdict-badge';
 import { Badge } from '@/components/ui/badge';
 import { EmptyState } from '@/components/ui/empty-state';
-import { Table, TBody, Td, Th, THead, Tr } from '@/components/ui/table';
+import { SimpleTable } from '@/components/ui/simple-table';
 import type { findRecentAdditions, findRecentAnalyses } from '@/lib/bath/history';
 import { describeRules, isRuleId } from '@/lib/bath/run-rules';
 import { formatWhen } from '@/lib/bath/display';
@@ -16,84 +16,65 @@ type Additions = Awaited<ReturnType<typeof findRecentAdditions>>;
 
 /** Analyses as entered: a corrected one stays, struck through, next to the entry that replaced it. */
 export function AnalysesTable({ rows, tankCode, system, canCorrect }: { rows: Analyses; tankCode: string; system: UnitSystem; canCorrect: boolean }) {
-  if (rows.length === 0) return <EmptyState title="No analyses yet" description="Log one from the Floor screen, or upload an outside lab's results." />;
+  const struck = (r: Analyses[number]) => (r.superseded_by_id ? 'line-through' : undefined);
   return (
-    <Table caption="Recent analyses" captionHidden dense>
-      <THead>
-        <tr>
-          <Th>Taken</Th>
-          <Th>Analyte</Th>
-          <Th numeric>Value</Th>
-          <Th>Status</Th>
-          <Th>Rules fired</Th>
-          <Th>By</Th>
-          <Th>
-            <span className="sr-only">Correct</span>
-          </Th>
-        </tr>
-      </THead>
-      <TBody>
-        {rows.map((r) => {
-          const superseded = !!r.superseded_by_id;
-          return (
-            <Tr key={r.id} className={superseded ? 'text-ink-faint' : undefined} data-superseded={superseded || undefined}>
-              <Td className={superseded ? 'line-through' : undefined}>{formatWhen(r.taken_at)}</Td>
-              <Td className={superseded ? 'line-through' : undefined}>{r.analyte_name}</Td>
-              <Td numeric className={superseded ? 'line-through' : undefined}>
-                {formatBathValue(r.value, r.unit, system)}
-              </Td>
-              <Td>
-                {superseded ? <Badge tone="outline">Corrected</Badge> : <VerdictBadge verdict={r.verdict} size="sm" />}
-                {r.supersedes_id ? <Badge tone="action" className="ml-1">Correction</Badge> : null}
-              </Td>
-              <Td className="max-w-64 text-xs">{r.rules.filter(isRuleId).length ? describeRules(r.rules.filter(isRuleId)) : '—'}</Td>
-              <Td className="text-xs">
-                {r.logged_by_name} · {SOURCE[r.source] ?? r.source}
-              </Td>
-              <Td>
-                {canCorrect && !superseded ? (
-                  <Link href={`/floor/tanks/${tankCode}/analytes/${r.analyte_key}?correct=${r.id}`} className="text-action underline">
-                    Correct
-                  </Link>
-                ) : null}
-              </Td>
-            </Tr>
-          );
-        })}
-      </TBody>
-    </Table>
+    <SimpleTable
+      dense
+      caption="Recent analyses"
+      rows={rows}
+      rowKey={(r) => r.id}
+      empty={<EmptyState title="No analyses yet" description="Log one from the Floor screen, or upload an outside lab's results." />}
+      rowAttributes={(r) => (r.superseded_by_id ? { className: 'text-ink-faint', 'data-superseded': true } : {})}
+      columns={[
+        { header: 'Taken', className: struck, cell: (r) => formatWhen(r.taken_at) },
+        { header: 'Analyte', className: struck, cell: (r) => r.analyte_name },
+        { header: 'Value', numeric: true, className: struck, cell: (r) => formatBathValue(r.value, r.unit, system) },
+        {
+          header: 'Status',
+          cell: (r) => (
+            <>
+              {r.superseded_by_id ? <Badge tone="outline">Corrected</Badge> : <VerdictBadge verdict={r.verdict} size="sm" />}
+              {r.supersedes_id ? <Badge tone="action" className="ml-1">Correction</Badge> : null}
+            </>
+          ),
+        },
+        { header: 'Rules fired', className: 'max-w-64 text-xs', cell: (r) => (r.rules.filter(isRuleId).length ? describeRules(r.rules.filter(isRuleId)) : '—') },
+        { header: 'By', className: 'text-xs', cell: (r) => `${r.logged_by_name} · ${SOURCE[r.source] ?? r.source}` },
+        {
+          header: <span className="sr-only">Correct</span>,
+          cell: (r) =>
+            canCorrect && !r.superseded_by_id ? (
+              <Link href={`/floor/tanks/${tankCode}/analytes/${r.analyte_key}?correct=${r.id}`} className="text-action underline">
+                Correct
+              </Link>
+            ) : null,
+        },
+      ]}
+    />
   );
 }
 
 export function AdditionsTable({ rows, system }: { rows: Additions; system: UnitSystem }) {
-  if (rows.length === 0) return <EmptyState title="No additions yet" description="Additions recorded at the tank appear here." />;
   return (
-    <Table caption="Recent additions" captionHidden dense>
-      <THead>
-        <tr>
-          <Th>Made</Th>
-          <Th>Material</Th>
-          <Th numeric>Amount</Th>
-          <Th numeric>Recommended</Th>
-          <Th>For</Th>
-          <Th>By</Th>
-        </tr>
-      </THead>
-      <TBody>
-        {rows.map((r) => {
-          const superseded = !!r.superseded_by_id;
-          return (
-            <Tr key={r.id} className={superseded ? 'text-ink-faint line-through' : undefined}>
-              <Td>{formatWhen(r.made_at)}</Td>
-              <Td>{r.material}</Td>
-              <Td numeric>{formatBathValue(r.amount, r.unit, system)}</Td>
-              <Td numeric>{r.recommended_amount !== null && r.recommended_unit ? formatBathValue(r.recommended_amount, r.recommended_unit, system) : '—'}</Td>
-              <Td className="text-xs">{r.analyte_name ?? 'whole bath'}{r.reason ? ` · ${r.reason}` : ''}</Td>
-              <Td className="text-xs">{r.made_by_name}</Td>
-            </Tr>
-          );
-        })}
-      </TBody>
-    </Table>
+    <SimpleTable
+      dense
+      caption="Recent additions"
+      rows={rows}
+      rowKey={(r) => r.id}
+      empty={<EmptyState title="No additions yet" description="Additions recorded at the tank appear here." />}
+      rowAttributes={(r) => ({ className: r.superseded_by_id ? 'text-ink-faint line-through' : undefined })}
+      columns={[
+        { header: 'Made', cell: (r) => formatWhen(r.made_at) },
+        { header: 'Material', cell: (r) => r.material },
+        { header: 'Amount', numeric: true, cell: (r) => formatBathValue(r.amount, r.unit, system) },
+        {
+          header: 'Recommended',
+          numeric: true,
+          cell: (r) => (r.recommended_amount !== null && r.recommended_unit ? formatBathValue(r.recommended_amount, r.recommended_unit, system) : '—'),
+        },
+        { header: 'For', className: 'text-xs', cell: (r) => `${r.analyte_name ?? 'whole bath'}${r.reason ? ` · ${r.reason}` : ''}` },
+        { header: 'By', className: 'text-xs', cell: (r) => r.made_by_name },
+      ]}
+    />
   );
 }

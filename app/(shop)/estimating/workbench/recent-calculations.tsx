@@ -1,6 +1,6 @@
 import Link from 'next/link';
 import { EmptyState } from '@/components/ui/empty-state';
-import { Table, TBody, Td, Th, THead, Tr } from '@/components/ui/table';
+import { SimpleTable } from '@/components/ui/simple-table';
 import { displayUnit, fromStorage, type UnitSystem } from '@/lib/plating';
 import { formatValue } from '@/lib/estimating/format';
 import type { CalculationSummary } from '@/lib/estimating/queries';
@@ -8,38 +8,27 @@ import type { CalculationSummary } from '@/lib/estimating/queries';
 const WHEN = new Intl.DateTimeFormat('en-GB', { dateStyle: 'medium', timeStyle: 'short', timeZone: 'UTC' });
 
 export function RecentCalculations({ rows, system }: { rows: CalculationSummary[]; system: UnitSystem }) {
-  if (rows.length === 0) {
-    return <EmptyState title="No saved calculations yet" description="Save one from the workbench above; quotes and parts can then use it." />;
-  }
   const area = displayUnit('area', system);
   return (
-    <Table caption="Recent calculations" captionHidden>
-      <THead>
-        <Tr>
-          <Th>Title</Th>
-          <Th>Metal</Th>
-          <Th numeric>Quantity</Th>
-          <Th numeric>Area per part</Th>
-          <Th>Saved</Th>
-        </Tr>
-      </THead>
-      <TBody>
-        {rows.map((r) => (
-          <Tr key={r.id}>
-            <Td>
-              <Link href={`/estimating/workbench?calc=${r.id}`} className="font-medium text-action underline-offset-2 hover:underline">
-                {r.title}
-              </Link>
-            </Td>
-            <Td>{r.metalName ?? '—'}</Td>
-            <Td numeric>{r.quantity ?? '—'}</Td>
-            <Td numeric>{formatValue(fromStorage(r.areaDm2, area), area)}</Td>
-            <Td>
-              {WHEN.format(r.createdAt)} UTC{r.createdBy ? ` · ${r.createdBy}` : ''}
-            </Td>
-          </Tr>
-        ))}
-      </TBody>
-    </Table>
+    <SimpleTable
+      caption="Recent calculations"
+      rows={rows}
+      rowKey={(r) => r.id}
+      empty={<EmptyState title="No saved calculations yet" description="Save one from the workbench above; quotes and parts can then use it." />}
+      columns={[
+        {
+          header: 'Title',
+          cell: (r) => (
+            <Link href={`/estimating/workbench?calc=${r.id}`} className="font-medium text-action underline-offset-2 hover:underline">
+              {r.title}
+            </Link>
+          ),
+        },
+        { header: 'Metal', cell: (r) => r.metalName ?? '—' },
+        { header: 'Quantity', numeric: true, cell: (r) => r.quantity ?? '—' },
+        { header: 'Area per part', numeric: true, cell: (r) => formatValue(fromStorage(r.areaDm2, area), area) },
+        { header: 'Saved', cell: (r) => `${WHEN.format(r.createdAt)} UTC${r.createdBy ? ` · ${r.createdBy}` : ''}` },
+      ]}
+    />
   );
 }

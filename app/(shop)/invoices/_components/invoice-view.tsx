@@ -2,7 +2,8 @@
 // badge, the lines with totals, and the payment history. Server components only.
 import { formatMoney, Money } from '@/components/money';
 import { Badge } from '@/components/ui/badge';
-import { Table, TBody, Td, TFoot, Th, THead, Tr } from '@/components/ui/table';
+import { SimpleTable } from '@/components/ui/simple-table';
+import { Td } from '@/components/ui/table';
 import { formatTaxRate, STATUS_WORDS } from '@/lib/billing/arithmetic';
 import type { InvoiceDetail, InvoiceSummary } from '@/lib/billing/queries';
 import { formatDateTime, formatDay, formatUnitPrice } from '@/lib/quotes/format';
@@ -25,40 +26,29 @@ const qty = new Intl.NumberFormat('en-US', { maximumFractionDigits: 4 });
 export function InvoiceLines({ detail }: { detail: InvoiceDetail }) {
   const { invoice, summary, lines } = detail;
   return (
-    <Table caption="Lines" captionHidden>
-      <THead>
-        <tr>
-          <Th>#</Th>
-          <Th>Description</Th>
-          <Th numeric>Quantity</Th>
-          <Th>Unit</Th>
-          <Th numeric>Unit price</Th>
-          <Th numeric>Amount</Th>
-        </tr>
-      </THead>
-      <TBody>
-        {lines.map((l) => (
-          <Tr key={l.id}>
-            <Td>{l.line_no}</Td>
-            <Td>{l.description}</Td>
-            <Td numeric>{qty.format(Number(l.quantity))}</Td>
-            <Td>{l.unit}</Td>
-            <Td numeric>{formatUnitPrice(Number(l.unit_price_cents))}</Td>
-            <Td numeric>
-              <Money cents={l.amount_cents} />
-            </Td>
-          </Tr>
-        ))}
-      </TBody>
-      <TFoot>
-        <TotalRow label="Subtotal" cents={invoice.subtotal_cents} />
-        <TotalRow label={`Tax (${formatTaxRate(invoice.tax_rate_bp)})`} cents={invoice.tax_cents} />
-        <TotalRow label="Total" cents={invoice.total_cents} />
-        {summary.creditedCents > 0 ? <TotalRow label="Credited" cents={-summary.creditedCents} /> : null}
-        {summary.paidCents > 0 ? <TotalRow label="Paid" cents={-summary.paidCents} /> : null}
-        <TotalRow label={summary.openCents < 0 ? 'Credit balance' : 'Balance due'} cents={Math.abs(summary.openCents)} strong />
-      </TFoot>
-    </Table>
+    <SimpleTable
+      caption="Lines"
+      rows={lines}
+      rowKey={(l) => l.id}
+      columns={[
+        { header: '#', cell: (l) => l.line_no },
+        { header: 'Description', cell: (l) => l.description },
+        { header: 'Quantity', numeric: true, cell: (l) => qty.format(Number(l.quantity)) },
+        { header: 'Unit', cell: (l) => l.unit },
+        { header: 'Unit price', numeric: true, cell: (l) => formatUnitPrice(Number(l.unit_price_cents)) },
+        { header: 'Amount', numeric: true, cell: (l) => <Money cents={l.amount_cents} /> },
+      ]}
+      footer={
+        <>
+          <TotalRow label="Subtotal" cents={invoice.subtotal_cents} />
+          <TotalRow label={`Tax (${formatTaxRate(invoice.tax_rate_bp)})`} cents={invoice.tax_cents} />
+          <TotalRow label="Total" cents={invoice.total_cents} />
+          {summary.creditedCents > 0 ? <TotalRow label="Credited" cents={-summary.creditedCents} /> : null}
+          {summary.paidCents > 0 ? <TotalRow label="Paid" cents={-summary.paidCents} /> : null}
+          <TotalRow label={summary.openCents < 0 ? 'Credit balance' : 'Balance due'} cents={Math.abs(summary.openCents)} strong />
+        </>
+      }
+    />
   );
 }
 
@@ -89,28 +79,20 @@ export function PaymentHistory({ detail }: { detail: InvoiceDetail }) {
     ...detail.creditNotes.map((c) => ({ key: c.id, at: c.created_at, what: `Credit note ${c.number}`, note: c.reason, cents: -c.amount_cents })),
     ...detail.declines.map((d) => ({ key: d.id, at: d.received_at, what: 'Card payment not completed', note: d.outcome.replace(/^declined: /, ''), cents: null })),
   ].sort((a, b) => a.at.getTime() - b.at.getTime());
-  if (rows.length === 0) return <p className="text-sm text-ink-muted">No payments yet.</p>;
   return (
-    <Table caption="Payment history" captionHidden dense>
-      <THead>
-        <tr>
-          <Th>When</Th>
-          <Th>What</Th>
-          <Th>Note</Th>
-          <Th numeric>Amount</Th>
-        </tr>
-      </THead>
-      <TBody>
-        {rows.map((r) => (
-          <Tr key={r.key}>
-            <Td className="whitespace-nowrap">{formatDateTime(r.at)}</Td>
-            <Td>{r.what}</Td>
-            <Td className="text-ink-muted">{r.note}</Td>
-            <Td numeric>{r.cents === null ? '—' : <Money cents={r.cents} accounting />}</Td>
-          </Tr>
-        ))}
-      </TBody>
-    </Table>
+    <SimpleTable
+      dense
+      caption="Payment history"
+      rows={rows}
+      rowKey={(r) => r.key}
+      empty={<p className="text-sm text-ink-muted">No payments yet.</p>}
+      columns={[
+        { header: 'When', className: 'whitespace-nowrap', cell: (r) => formatDateTime(r.at) },
+        { header: 'What', cell: (r) => r.what },
+        { header: 'Note', className: 'text-ink-muted', cell: (r) => r.note },
+        { header: 'Amount', numeric: true, cell: (r) => (r.cents === null ? '—' : <Money cents={r.cents} accounting />) },
+      ]}
+    />
   );
 }
 

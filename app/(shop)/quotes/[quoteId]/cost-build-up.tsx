@@ -1,5 +1,6 @@
 import { Money } from '@/components/money';
-import { Table, TBody, TFoot, Td, Th, THead, Tr } from '@/components/ui/table';
+import { SimpleTable } from '@/components/ui/simple-table';
+import { Td, Tr } from '@/components/ui/table';
 import { formatNumber, formatStoredQuantity, type UnitSystem } from '@/lib/plating';
 import { BASIS_LABELS } from '@/lib/quotes/basis';
 import { componentFigures } from '@/lib/quotes/display';
@@ -13,71 +14,62 @@ export function CostBuildUp({ price, units, caption, quantity }: { price: LinePr
   const perLoad = Math.min(j.partsPerLoad, quantity);
   return (
     <div className="flex flex-col gap-3">
-      <Table dense caption={caption} captionHidden>
-        <THead>
-          <tr>
-            <Th>Cost</Th>
-            <Th numeric>Quantity</Th>
-            <Th numeric>Rate</Th>
-            <Th numeric>Amount</Th>
-          </tr>
-        </THead>
-        <TBody>
-          {price.components.map((c) => {
-            const f = componentFigures(c, units);
-            return (
-              <Tr key={c.key}>
-                <Td>{c.label}</Td>
-                <Td numeric>{f.quantity}</Td>
-                <Td numeric>{f.rate}</Td>
-                <Td numeric>
-                  <Money cents={c.cents} />
-                </Td>
-              </Tr>
-            );
-          })}
-          <Tr>
-            <Td className="font-medium">Subtotal (cost)</Td>
-            <Td />
-            <Td />
-            <Td numeric className="font-medium">
-              <Money cents={price.subtotalCents} />
-            </Td>
-          </Tr>
-          <Tr>
-            <Td>Margin</Td>
-            <Td />
-            <Td numeric>{price.marginPct} %</Td>
-            <Td numeric>
-              <Money cents={price.marginCents} />
-            </Td>
-          </Tr>
-          <Tr>
-            <Td>Lot charge</Td>
-            <Td />
-            <Td />
-            <Td numeric>
-              <Money cents={price.lotChargeCents} />
-            </Td>
-          </Tr>
-          <Tr>
-            <Td>Minimum charge</Td>
-            <Td />
-            <Td numeric>
-              <Money cents={price.minimumChargeCents} />
-            </Td>
-            <Td numeric>{price.minimumApplied ? <>raised to <Money cents={price.minimumChargeCents} /></> : 'not reached'}</Td>
-          </Tr>
-          <Tr>
-            <Td>Rush</Td>
-            <Td />
-            <Td numeric>× {price.rushMultiplierPct} %</Td>
-            <Td numeric>
-              <Money cents={price.rushCents} />
-            </Td>
-          </Tr>
-        </TBody>
-        <TFoot>
+      <SimpleTable
+        dense
+        caption={caption}
+        rows={price.components.map((c) => ({ ...c, figures: componentFigures(c, units) }))}
+        rowKey={(c) => c.key}
+        columns={[
+          { header: 'Cost', cell: (c) => c.label },
+          { header: 'Quantity', numeric: true, cell: (c) => c.figures.quantity },
+          { header: 'Rate', numeric: true, cell: (c) => c.figures.rate },
+          { header: 'Amount', numeric: true, cell: (c) => <Money cents={c.cents} /> },
+        ]}
+        extraRows={
+          <>
+            <Tr>
+              <Td className="font-medium">Subtotal (cost)</Td>
+              <Td />
+              <Td />
+              <Td numeric className="font-medium">
+                <Money cents={price.subtotalCents} />
+              </Td>
+            </Tr>
+            <Tr>
+              <Td>Margin</Td>
+              <Td />
+              <Td numeric>{price.marginPct} %</Td>
+              <Td numeric>
+                <Money cents={price.marginCents} />
+              </Td>
+            </Tr>
+            <Tr>
+              <Td>Lot charge</Td>
+              <Td />
+              <Td />
+              <Td numeric>
+                <Money cents={price.lotChargeCents} />
+              </Td>
+            </Tr>
+            <Tr>
+              <Td>Minimum charge</Td>
+              <Td />
+              <Td numeric>
+                <Money cents={price.minimumChargeCents} />
+              </Td>
+              <Td numeric>{price.minimumApplied ? <>raised to <Money cents={price.minimumChargeCents} /></> : 'not reached'}</Td>
+            </Tr>
+            <Tr>
+              <Td>Rush</Td>
+              <Td />
+              <Td numeric>× {price.rushMultiplierPct} %</Td>
+              <Td numeric>
+                <Money cents={price.rushCents} />
+              </Td>
+            </Tr>
+          </>
+        }
+        footer={
           <tr>
             <Td>Computed line total</Td>
             <Td numeric>{formatUnitPrice(price.perPieceCents)} per piece</Td>
@@ -86,8 +78,8 @@ export function CostBuildUp({ price, units, caption, quantity }: { price: LinePr
               <Money cents={price.totalCents} />
             </Td>
           </tr>
-        </TFoot>
-      </Table>
+        }
+      />
       <dl className="grid grid-cols-2 gap-x-4 gap-y-1 text-xs text-ink-muted sm:grid-cols-4">
         <div>
           <dt>Loads</dt>

@@ -1,6 +1,7 @@
 import { Money } from '@/components/money';
 import { Card } from '@/components/ui/card';
-import { Table, TBody, TFoot, Td, Th, THead, Tr } from '@/components/ui/table';
+import { SimpleTable } from '@/components/ui/simple-table';
+import { Td } from '@/components/ui/table';
 import type { CostComparison } from '@/lib/orders/costing';
 
 /** Quoted cost beside the cost of the runs actually logged, and the margin that leaves. */
@@ -11,56 +12,44 @@ export function JobCostCard({ c, hasRuns }: { c: CostComparison; hasRuns: boolea
       description={hasRuns ? 'Actual cost from the plating runs (amp-hours, tank time, loads) at the rates the quote used; masking and bake follow the received quantity and loads.' : 'No runs logged yet: the actual column fills in as runs are logged.'}
       padding="none"
     >
-      <Table dense caption="Quoted and actual cost" captionHidden>
-        <THead>
-          <tr>
-            <Th>Cost</Th>
-            <Th numeric>Quoted</Th>
-            <Th numeric>Actual</Th>
-            <Th numeric>Difference</Th>
-          </tr>
-        </THead>
-        <TBody>
-          {c.rows.map((r) => (
-            <Tr key={r.key}>
-              <Td>{r.label}</Td>
+      <SimpleTable
+        dense
+        caption="Quoted and actual cost"
+        rows={c.rows}
+        rowKey={(r) => r.key}
+        columns={[
+          { header: 'Cost', cell: (r) => r.label },
+          { header: 'Quoted', numeric: true, cell: (r) => <Money cents={r.quotedCents} /> },
+          { header: 'Actual', numeric: true, cell: (r) => <Money cents={r.actualCents} /> },
+          { header: 'Difference', numeric: true, cell: (r) => <Money cents={r.actualCents - r.quotedCents} accounting /> },
+        ]}
+        footer={
+          <>
+            <tr>
+              <Td>Cost</Td>
               <Td numeric>
-                <Money cents={r.quotedCents} />
+                <Money cents={c.quotedCostCents} />
               </Td>
               <Td numeric>
-                <Money cents={r.actualCents} />
+                <Money cents={c.actualCostCents} />
               </Td>
               <Td numeric>
-                <Money cents={r.actualCents - r.quotedCents} accounting />
+                <Money cents={c.varianceCents} accounting />
               </Td>
-            </Tr>
-          ))}
-        </TBody>
-        <TFoot>
-          <tr>
-            <Td>Cost</Td>
-            <Td numeric>
-              <Money cents={c.quotedCostCents} />
-            </Td>
-            <Td numeric>
-              <Money cents={c.actualCostCents} />
-            </Td>
-            <Td numeric>
-              <Money cents={c.varianceCents} accounting />
-            </Td>
-          </tr>
-          <tr>
-            <Td>Margin on the price of <Money cents={c.priceCents} /></Td>
-            <Td numeric>
-              <Money cents={c.quotedMarginCents} accounting />
-            </Td>
-            <Td numeric>
-              <Money cents={c.realisedMarginCents} accounting />
-            </Td>
-            <Td numeric>{c.realisedMarginPct === null ? '—' : `${c.realisedMarginPct} % realised`}</Td>
-          </tr>
-        </TFoot>
-      </Table>
+            </tr>
+            <tr>
+              <Td>Margin on the price of <Money cents={c.priceCents} /></Td>
+              <Td numeric>
+                <Money cents={c.quotedMarginCents} accounting />
+              </Td>
+              <Td numeric>
+                <Money cents={c.realisedMarginCents} accounting />
+              </Td>
+              <Td numeric>{c.realisedMarginPct === null ? '—' : `${c.realisedMarginPct} % realised`}</Td>
+            </tr>
+          </>
+        }
+      />
     </Card>
   );
 }
