@@ -1,4 +1,5 @@
-// Local e-mail catcher: an SMTP server that keeps every message, and a JSON API to read them.
+// Local e-mail catcher: an SMTP server that keeps every message, and a JSON API to read them and
+// to hold the reply to a recipient's messages (mail-holds.ts).
 // Run: npx tsx docker-free-scripts/fakes/mail-fake.ts   (SMTP_PORT, MAILBOX_PORT, FAKES_STATE_DIR)
 import { randomUUID } from 'node:crypto';
 import http from 'node:http';
@@ -10,9 +11,11 @@ import {
   isMainModule,
   listenLocal,
   portFromEnv,
+  readBody,
   resolveStateDir,
   sendJson,
 } from './fake-http';
+import { holdSchema, MailHolds } from './mail-holds';
 import { MailStore, type StoredMessage } from './mail-store';
 
 export type MailFakeOptions = {
@@ -71,7 +74,19 @@ function toStoredMessage(
   };
 }
 
-function createMailboxApi(store: MailStore): http.Server {
+async function addHold(holds: MailHolds, req: http.IncomingMessage, res: http.ServerResponse): Promise<void> {
+  let body: unknown;
+  try {
+    body = JSON.parse(await readBody(req, 10_000));
+  } catch {
+    return sendJson(res, 400, { error: 'Send a JSON body: { "to": address, "ms"?: 1..600000, "outcome"?: "accept" | "reject" }' });
+  }
+  const parsed = holdSchema.safeParse(body);
+  if (!parsed.success) return sendJson(res, 400, { error: parsed.error.issues.map((i) => `${i.path.join('.') || 'body'}: ${i.message}`).join('; ') });
+  return sendJson(res, 201, holds.add(parsed.data));
+}
+
+function createMailboxApi(store: MailStore, holds: MailHolds): http.Server {
   return http.createServer((req, res) => {
     const url = new URL(req.url ?? '/', 'http://127.0.0.1');
     const parts = url.pathname.split('/').filter(Boolean);
@@ -94,9 +109,15 @@ function createMailboxApi(store: MailStore): http.Server {
       if (!message) return sendJson(res, 404, { error: `No message with id "${id}"` });
       return sendJson(res, 200, message);
     }
+    if (url.pathname === '/holds') {
+      if (method === 'GET') return sendJson(res, 200, holds.list());
+      if (method === 'POST') return void addHold(holds, req, res);
+      if (method === 'DELETE') return sendJson(res, 200, { released: holds.release(url.searchParams.get('to') ?? undefined) });
+      return sendJson(res, 405, { error: `Method ${method} is not allowed on /holds` });
+    }
     return sendJson(res, 404, {
       error: `Unknown route ${method} ${url.pathname}`,
-      routes: ['GET /health', 'GET /messages[?to=addr]', 'GET /messages/:id', 'DELETE /messages'],
+      routes: ['GET /health', 'GET /messages[?to=addr]', 'GET /messages/:id', 'DELETE /messages', 'GET /holds', 'POST /holds', 'DELETE /holds[?to=addr]'],
     });
   });
 }
@@ -104,6 +125,7 @@ function createMailboxApi(store: MailStore): http.Server {
 export async function startMailFake(options: MailFakeOptions = {}): Promise<MailFake> {
   const log = options.log ?? ((line: string) => console.log(line));
   const store = new MailStore(options.stateDir ?? resolveStateDir('mail'), options.cap, log);
+  const holds = new MailHolds();
 
   const smtp = new SMTPServer({
     secure: false,
@@ -120,9 +142,16 @@ export async function startMailFake(options: MailFakeOptions = {}): Promise<Mail
         to: session.envelope.rcptTo.map((r) => r.address),
       };
       simpleParser(stream)
-        .then((parsed) => {
+        .then(async (parsed) => {
           if (stream.sizeExceeded) {
             callback(Object.assign(new Error('Message is too large'), { responseCode: 552 }));
+            return;
+          }
+          // The whole message is in; the reply (and so the acceptance) waits while a recipient is held.
+          const outcome = await holds.wait(session.id, envelope.to);
+          if (outcome !== 'accept') {
+            log(`[mail-fake] not accepted (${outcome}) to=${envelope.to.join(',')} subject="${parsed.subject ?? ''}"`);
+            callback(Object.assign(new Error('Try again later'), { responseCode: 451 }));
             return;
           }
           const message = toStoredMessage(parsed, envelope);
@@ -134,6 +163,9 @@ export async function startMailFake(options: MailFakeOptions = {}): Promise<Mail
           log(`[mail-fake] could not parse a message: ${String(err)}`);
           callback(Object.assign(new Error('Could not parse the message'), { responseCode: 554 }));
         });
+    },
+    onClose(session) {
+      holds.clientGone(session.id);
     },
   });
   smtp.on('error', (err) => log(`[mail-fake] SMTP error: ${err.message}`));
@@ -148,7 +180,7 @@ export async function startMailFake(options: MailFakeOptions = {}): Promise<Mail
     });
   });
 
-  const api = createMailboxApi(store);
+  const api = createMailboxApi(store, holds);
   let httpPort: number;
   try {
     httpPort = await listenLocal(api, options.httpPort ?? 2580);
@@ -161,6 +193,7 @@ export async function startMailFake(options: MailFakeOptions = {}): Promise<Mail
     smtpPort,
     httpPort,
     async close() {
+      holds.release();
       await Promise.all([
         new Promise<void>((resolve) => smtp.close(() => resolve())),
         closeHttpServer(api),

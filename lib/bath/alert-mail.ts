@@ -3,11 +3,13 @@ import { sql, type Kysely } from 'kysely';
 import { db as defaultDb } from '@/db';
 import type { AlertEmailKind, Database, Role } from '@/db/types';
 import { appUrl, sendEmail } from '@/lib/email/mailer';
+import { inTransaction } from '@/lib/records/transaction';
 import { ALERT_KIND_LABEL } from './alerts';
 
 // E-mail about bath alerts: supervisors when one is raised, owners when it escalates. Each
-// (alert, kind, recipient) is claimed in bath_alert_emails before sending, so a job or request
-// that runs twice never sends the same message twice.
+// (alert, kind, recipient) is claimed in bath_alert_emails in the transaction that sends it: a job
+// or request that runs twice, or at once, sends the message once (the second waits on the first's
+// claim), and a sender that dies before the commit leaves no claim, so the next run sends it.
 
 const RECIPIENT_ROLE: Record<AlertEmailKind, Role> = { raised: 'supervisor', escalated: 'owner' };
 
@@ -26,41 +28,46 @@ export async function notifyAlert(alertId: string, kind: AlertEmailKind, executo
     .where('al.id', '=', alertId)
     .executeTakeFirst();
   if (!alert || alert.state === 'acknowledged') return 0;
+  const what = `${alert.code} ${alert.tank_name}${alert.analyte_name ? `: ${alert.analyte_name}` : ''}`;
+  const subject = `${kind === 'escalated' ? 'Escalated, not yet acknowledged' : ALERT_KIND_LABEL[alert.kind]} — ${what}`;
+  const text = [
+    kind === 'escalated'
+      ? `This bath alert has not been acknowledged since ${alert.raised_at.toISOString()} and has been escalated to you.`
+      : 'A bath alert was raised.',
+    '',
+    `Tank: ${alert.code} ${alert.tank_name}`,
+    ...(alert.analyte_name ? [`Analyte: ${alert.analyte_name}`] : []),
+    `What: ${ALERT_KIND_LABEL[alert.kind]}`,
+    alert.message,
+    '',
+    `Acknowledge it with the corrective action taken: ${appUrl('/baths/alerts')}`,
+  ].join('\n');
   let sent = 0;
   for (const to of await recipients(executor, RECIPIENT_ROLE[kind])) {
-    const claimed = await executor
-      .insertInto('bath_alert_emails')
-      .values({ alert_id: alertId, kind, recipient: to })
-      .onConflict((oc) =>
-        // A message that failed (mail server down) is claimed again and retried; one sent or being sent is not.
-        oc.columns(['alert_id', 'kind', 'recipient']).doUpdateSet({ status: 'pending' }).where('bath_alert_emails.status', '=', 'failed'),
-      )
-      .returning('alert_id')
-      .executeTakeFirst();
-    if (!claimed) continue;
-    const what = `${alert.code} ${alert.tank_name}${alert.analyte_name ? `: ${alert.analyte_name}` : ''}`;
-    const subject = `${kind === 'escalated' ? 'Escalated, not yet acknowledged' : ALERT_KIND_LABEL[alert.kind]} — ${what}`;
-    const text = [
-      kind === 'escalated'
-        ? `This bath alert has not been acknowledged since ${alert.raised_at.toISOString()} and has been escalated to you.`
-        : 'A bath alert was raised.',
-      '',
-      `Tank: ${alert.code} ${alert.tank_name}`,
-      ...(alert.analyte_name ? [`Analyte: ${alert.analyte_name}`] : []),
-      `What: ${ALERT_KIND_LABEL[alert.kind]}`,
-      alert.message,
-      '',
-      `Acknowledge it with the corrective action taken: ${appUrl('/baths/alerts')}`,
-    ].join('\n');
-    const result = await sendEmail({ to, subject, text, template: `bath-alert-${kind}` });
-    await executor
-      .updateTable('bath_alert_emails')
-      .set({ status: result.ok ? 'sent' : 'failed', sent_at: result.ok ? sql`now()` : null })
-      .where('alert_id', '=', alertId)
-      .where('kind', '=', kind)
-      .where('recipient', '=', to)
-      .execute();
-    if (result.ok) sent++;
+    const ok = await inTransaction(executor, async (trx) => {
+      const claimed = await trx
+        .insertInto('bath_alert_emails')
+        .values({ alert_id: alertId, kind, recipient: to, status: 'sent', sent_at: sql`now()` })
+        .onConflict((oc) =>
+          // A message that failed (mail server down), or was left pending by an older version, is claimed again.
+          oc.columns(['alert_id', 'kind', 'recipient']).doUpdateSet({ status: 'sent', sent_at: sql`now()` }).where('bath_alert_emails.status', '<>', 'sent'),
+        )
+        .returning('alert_id')
+        .executeTakeFirst();
+      if (!claimed) return false;
+      const result = await sendEmail({ to, subject, text, template: `bath-alert-${kind}` });
+      if (!result.ok) {
+        await trx
+          .updateTable('bath_alert_emails')
+          .set({ status: 'failed', sent_at: null })
+          .where('alert_id', '=', alertId)
+          .where('kind', '=', kind)
+          .where('recipient', '=', to)
+          .execute();
+      }
+      return result.ok;
+    });
+    if (ok) sent++;
   }
   return sent;
 }

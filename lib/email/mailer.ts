@@ -34,6 +34,7 @@ export function mailFrom(): string {
 }
 
 export async function sendEmail(mail: OutgoingEmail): Promise<{ messageId: string | null; ok: boolean }> {
+  let messageId: string;
   try {
     const info = await transport().sendMail({
       from: mailFrom(),
@@ -43,21 +44,25 @@ export async function sendEmail(mail: OutgoingEmail): Promise<{ messageId: strin
       html: mail.html,
       attachments: mail.attachments,
     });
-    await db
-      .insertInto('emails')
-      .values({ to_address: mail.to, subject: mail.subject, template: mail.template, message_id: info.messageId, status: 'sent' })
-      .execute();
-    return { messageId: info.messageId, ok: true };
+    messageId = info.messageId;
   } catch (err) {
     const message = err instanceof Error ? err.message : String(err);
     console.error(`[mail] sending "${mail.subject}" to ${mail.to} failed: ${message}`);
-    await db
-      .insertInto('emails')
-      .values({ to_address: mail.to, subject: mail.subject, template: mail.template, message_id: null, status: 'failed', error: message.slice(0, 500) })
-      .execute()
-      .catch(() => undefined);
+    await logEmail(mail, { message_id: null, status: 'failed', error: message.slice(0, 500) });
     return { messageId: null, ok: false };
   }
+  // Accepted by the relay: sent, even if the log row cannot be written (a caller told "failed"
+  // would undo its claim and send the message again).
+  await logEmail(mail, { message_id: messageId, status: 'sent' });
+  return { messageId, ok: true };
+}
+
+async function logEmail(mail: OutgoingEmail, outcome: { message_id: string | null; status: 'sent' | 'failed'; error?: string }): Promise<void> {
+  await db
+    .insertInto('emails')
+    .values({ to_address: mail.to, subject: mail.subject, template: mail.template, ...outcome })
+    .execute()
+    .catch((err: unknown) => console.error(`[mail] could not log "${mail.subject}" to ${mail.to}: ${err instanceof Error ? err.message : String(err)}`));
 }
 
 export function appUrl(path = '/'): string {

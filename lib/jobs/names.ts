@@ -7,6 +7,7 @@ export const JOB = {
   bathAlertEmails: 'bath-alert-emails',
   invoiceReminders: 'invoice-overdue-reminders',
   bakeWindowAlerts: 'quality-bake-window-alerts',
+  quoteExpiry: 'quote-expiry',
 } as const;
 
 export type JobName = (typeof JOB)[keyof typeof JOB];

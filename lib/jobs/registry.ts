@@ -3,6 +3,7 @@ import { sendOwedAlertEmails } from '@/lib/bath/alert-mail';
 import { checkMissingAdditions, checkOverdueAnalyses, escalateUnacknowledged } from '@/lib/bath/scheduled-checks';
 import { sendOverdueReminders } from '@/lib/billing/reminders';
 import { alertClosingBakeWindows } from '@/lib/quality/bake-alerts';
+import { expireOverdueQuotes } from '@/lib/quotes/lifecycle';
 import { JOB } from './names';
 
 // Every background job in one list: its queue, when it runs (cron, UTC) and what it does. Another
@@ -15,6 +16,8 @@ export type JobDefinition = {
   cron?: string;
   description: string;
   handler: (data: unknown) => Promise<unknown>;
+  /** A run's time limit, after which a dead worker's run is retried (default DEFAULT_EXPIRE_SECONDS in ./boss). */
+  expireInSeconds?: number;
 };
 
 export const JOBS: readonly JobDefinition[] = [
@@ -53,5 +56,11 @@ export const JOBS: readonly JobDefinition[] = [
     cron: '*/5 * * * *',
     description: 'E-mail supervisors once when an order\'s embrittlement-relief bake window is about to close.',
     handler: () => alertClosingBakeWindows(),
+  },
+  {
+    name: JOB.quoteExpiry,
+    cron: '20 0 * * *',
+    description: 'Mark sent quotes past their valid-until date as expired (pages already show them so); the customer can no longer accept them.',
+    handler: async () => ({ expired: await expireOverdueQuotes() }),
   },
 ];

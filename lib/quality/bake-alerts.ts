@@ -1,12 +1,14 @@
 import 'server-only';
 // The scheduled check that warns supervisors before an order's relief-bake window closes. Each
-// order is claimed in bake_window_alerts before the e-mail goes out, so however often the job
-// runs, and however many workers run it, each order's supervisors are e-mailed once.
+// order is claimed in bake_window_alerts in the transaction that sends its one message to all the
+// supervisors, so however often the job runs, and however many workers run it, they are e-mailed
+// once; a send that fails, or a worker that dies before the commit, leaves it for the next run.
 import { type Kysely, sql } from 'kysely';
 import { db as appDb } from '@/db';
 import type { Database } from '@/db/types';
 import { cautionTexts, SAFETY_DEFERRAL } from '@/components/ui/caution';
 import { appUrl, sendEmail } from '@/lib/email/mailer';
+import { inTransaction } from '@/lib/records/transaction';
 import { formatShopTime, shopTimeZone } from './shop-time';
 
 /** Warn this long before the window closes; the job (lib/jobs/registry.ts) runs every 5 min. */
@@ -42,6 +44,8 @@ export async function findOpenBakeWindows(db: Kysely<Database> = appDb): Promise
 
 type Mailer = typeof sendEmail;
 
+class BakeAlertNotSent extends Error {}
+
 export async function alertClosingBakeWindows(
   opts: { db?: Kysely<Database>; now?: Date; leadMinutes?: number; send?: Mailer } = {},
 ): Promise<{ alerted: string[] }> {
@@ -56,20 +60,20 @@ export async function alertClosingBakeWindows(
   const tz = shopTimeZone();
   const alerted: string[] = [];
   for (const w of due) {
-    const claimed = await db
-      .insertInto('bake_window_alerts')
-      .values({ work_order_id: w.workOrderId, deadline_at: w.deadlineAt, sent_to: to })
-      .onConflict((oc) => oc.column('work_order_id').doNothing())
-      .returning('work_order_id')
-      .executeTakeFirst();
-    if (!claimed) continue;
-    alerted.push(w.workOrderId);
     const minutes = Math.round((w.deadlineAt.getTime() - now.getTime()) / 60_000);
     const when = minutes >= 0 ? `closes in ${minutes} min` : `closed ${-minutes} min ago`;
     const caution = cautionTexts['high-strength-steel-bake'];
-    for (const address of to) {
-      await send({
-        to: address,
+    const claimed = await inTransaction(db, async (trx) => {
+      const row = await trx
+        .insertInto('bake_window_alerts')
+        .values({ work_order_id: w.workOrderId, deadline_at: w.deadlineAt, sent_to: to })
+        .onConflict((oc) => oc.column('work_order_id').doNothing())
+        .returning('work_order_id')
+        .executeTakeFirst();
+      if (!row || to.length === 0) return !!row;
+      // One message to every supervisor: one acceptance by the relay, so no partial send to undo.
+      const mail = await send({
+        to: to.join(', '),
         subject: `Bake window ${when}: ${w.number}`,
         template: 'quality.bake-window',
         text: [
@@ -81,7 +85,14 @@ export async function alertClosingBakeWindows(
           `${caution.title}. ${caution.text} ${SAFETY_DEFERRAL}`,
         ].join('\n'),
       });
-    }
+      // Undo the claim so the next run tries again; the mailer has logged the failure.
+      if (!mail.ok) throw new BakeAlertNotSent();
+      return true;
+    }).catch((err: unknown) => {
+      if (err instanceof BakeAlertNotSent) return false;
+      throw err;
+    });
+    if (claimed) alerted.push(w.workOrderId);
   }
   return { alerted };
 }

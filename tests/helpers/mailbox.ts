@@ -21,6 +21,25 @@ export async function waitForMessage(address: string, subject: RegExp, since: nu
   throw new Error(`no message "${subject}" to ${address} within ${timeoutMs} ms`);
 }
 
+// Holds the fake's reply to messages for `address` (mail-holds.ts), so a test can stop the sender
+// in the middle of an SMTP conversation; when released, they are accepted or refused (451).
+export async function holdMail(address: string, options: { ms?: number; outcome?: 'accept' | 'reject' } = {}): Promise<void> {
+  const res = await fetch(`${MAILBOX_URL}/holds`, { method: 'POST', body: JSON.stringify({ to: address, ...options }) });
+  if (res.status !== 201) throw new Error(`mailbox refused the hold: ${res.status} ${await res.text()}`);
+}
+
+/** How many messages wait on each held address. */
+export async function heldMail(): Promise<Map<string, number>> {
+  const res = await fetch(`${MAILBOX_URL}/holds`);
+  if (!res.ok) throw new Error(`mailbox answered ${res.status}`);
+  return new Map(((await res.json()) as { to: string; waiting: number }[]).map((h) => [h.to, h.waiting]));
+}
+
+export async function releaseMail(address?: string): Promise<void> {
+  const res = await fetch(`${MAILBOX_URL}/holds${address ? `?to=${encodeURIComponent(address)}` : ''}`, { method: 'DELETE' });
+  if (!res.ok) throw new Error(`mailbox answered ${res.status}`);
+}
+
 export function firstLink(text: string): string {
   const m = text.match(/https?:\/\/\S+/);
   if (!m) throw new Error('message has no link');

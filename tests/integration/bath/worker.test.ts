@@ -1,7 +1,7 @@
 import { afterAll, describe, expect, it } from 'vitest';
 import { db } from '@/db';
 import { databaseUrl } from '@/db/pool';
-import { startWorker } from '@/lib/jobs/boss';
+import { DEFAULT_EXPIRE_SECONDS, startWorker } from '@/lib/jobs/boss';
 import { JOBS } from '@/lib/jobs/registry';
 
 afterAll(() => db.destroy());
@@ -39,5 +39,20 @@ describe('background worker (pg-boss on our PostgreSQL)', () => {
       await worker.boss.unschedule(`test-worker-scheduled`);
       await worker.stop();
     }
+  }, 60_000);
+
+  it('applies a job\'s expiry, or the worker\'s override, to a queue that already exists', async () => {
+    const job = { name: 'test-worker-expiry', description: 'test', handler: async () => undefined };
+    const queueOf = async (options: { expireInSeconds?: number; retryDelaySeconds?: number }, jobExpiry?: number) => {
+      const worker = await startWorker({ connectionString: databaseUrl(), log: () => undefined, jobs: [{ ...job, expireInSeconds: jobExpiry }], ...options });
+      try {
+        return await worker.boss.getQueue(job.name);
+      } finally {
+        await worker.stop();
+      }
+    };
+    expect(await queueOf({})).toMatchObject({ expireInSeconds: DEFAULT_EXPIRE_SECONDS, retryDelay: 30, policy: 'stately' });
+    expect(await queueOf({}, 90)).toMatchObject({ expireInSeconds: 90 });
+    expect(await queueOf({ expireInSeconds: 5, retryDelaySeconds: 1 }, 90)).toMatchObject({ expireInSeconds: 5, retryDelay: 1 });
   }, 60_000);
 });

@@ -127,12 +127,26 @@ describe('the bake-window alert job', () => {
     expect(first.alerted).toContain(closing.id);
     expect(first.alerted).not.toContain(early.id);
     const mine = sent.filter((m) => m.subject.endsWith(closing.number));
-    expect(mine.map((m) => m.to)).toContain(SUPERVISOR);
+    // One message, addressed to every active supervisor.
+    expect(mine).toHaveLength(1);
+    expect(mine[0]!.to.split(', ')).toContain(SUPERVISOR);
     expect(mine[0]!.subject).toBe(`Bake window closes in 30 min: ${closing.number}`);
     expect(mine[0]!.text).toContain('/quality/orders/');
     expect(mine[0]!.text).toContain("customer's specification");
     const again = await alertClosingBakeWindows({ now: new Date(now.getTime() + 10 * 60_000), send });
     expect(again.alerted).not.toContain(closing.id);
     expect(sent.filter((m) => m.subject.endsWith(closing.number))).toHaveLength(mine.length);
+  });
+
+  it('leaves an order whose e-mail failed for the next run', async () => {
+    const now = new Date();
+    const closing = await createLot(db, { bake: true, platingEnd: new Date(now.getTime() - 3.5 * 3_600_000) });
+    const failed = await alertClosingBakeWindows({ now, send: async () => ({ messageId: null, ok: false }) });
+    expect(failed.alerted).not.toContain(closing.id);
+    expect(await db.selectFrom('bake_window_alerts').select('work_order_id').where('work_order_id', '=', closing.id).execute()).toEqual([]);
+    const sent: string[] = [];
+    const next = await alertClosingBakeWindows({ now, send: async (m) => (sent.push(m.subject), { messageId: 'test', ok: true }) });
+    expect(next.alerted).toContain(closing.id);
+    expect(sent.filter((s) => s.endsWith(closing.number))).toHaveLength(1);
   });
 });

@@ -1,6 +1,8 @@
 import { sql } from 'kysely';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { db } from '@/db';
+import { JOB } from '@/lib/jobs/names';
+import { JOBS } from '@/lib/jobs/registry';
 import { acceptQuote, declineQuote, expireOverdueQuotes, markQuoteSent, reviseQuote } from '@/lib/quotes/lifecycle';
 import { addQuoteLine, clearLineOverride, createQuote, overrideLinePrice, removeQuoteLine } from '@/lib/quotes/mutations';
 import { formatDocumentNumber, nextDocumentNumber } from '@/lib/quotes/numbering';
@@ -156,6 +158,38 @@ describe('sending, revising and expiry', () => {
     expect((await getQuote(q.id))!.status).toBe('expired');
     // An expired quote may be revised into a fresh draft.
     expect((await reviseQuote(estimator, q.id)).revision).toBe('B');
+  });
+
+  it('the daily expiry job expires a sent quote past its date once, leaves a running one sent, and the customer can then neither accept nor decline it', async () => {
+    const job = JOBS.find((j) => j.name === JOB.quoteExpiry);
+    expect(job?.cron).toMatch(/^\d+ \d+ \* \* \*$/); // once a day
+    const overdue = await draftWithLine(30);
+    const running = await draftWithLine(40);
+    const draft = await draftWithLine(50);
+    await markQuoteSent(estimator, { quoteId: overdue.id, contactUserId: cust.contact.id }, db, new Date(Date.now() - 31 * 86_400_000));
+    await markQuoteSent(estimator, { quoteId: running.id, contactUserId: cust.contact.id });
+    const rows = () => db.selectFrom('quotes').select(['id', 'status', 'updated_at']).where('id', 'in', [overdue.id, running.id, draft.id]).orderBy('id').execute();
+    const readBefore = Object.fromEntries((await rows()).map((r) => [r.id, r.status]));
+    expect(readBefore).toEqual({ [overdue.id]: 'sent', [running.id]: 'sent', [draft.id]: 'draft' });
+
+    const startedAt = new Date();
+    const first = (await job!.handler({})) as { expired: number };
+    expect(first.expired).toBeGreaterThanOrEqual(1);
+    const afterFirst = await rows();
+    expect(Object.fromEntries(afterFirst.map((r) => [r.id, r.status]))).toEqual({ [overdue.id]: 'expired', [running.id]: 'sent', [draft.id]: 'draft' });
+
+    // Run again: nothing that was due by the first run is left to change, and our rows stay as they were.
+    await job!.handler({});
+    expect(await expireOverdueQuotes(db, startedAt)).toBe(0);
+    expect(await rows()).toEqual(afterFirst);
+
+    expect(await outcome(acceptQuote(cust.contact, { quoteId: overdue.id, poNumber: 'PO-EXPIRED', neededBy: null }))).toMatch(/^CONFLICT: This quote expired on/);
+    expect(await outcome(declineQuote(cust.contact, { quoteId: overdue.id, reason: 'too late' }))).toMatch(/^CONFLICT: This quote expired on/);
+    const orders = await db.selectFrom('work_orders as w').innerJoin('quote_lines as l', 'l.id', 'w.quote_line_id').select('w.id').where('l.quote_id', '=', overdue.id).execute();
+    expect(orders).toHaveLength(0);
+    expect((await findPortalQuotes(cust.id)).find((q) => q.id === overdue.id)?.status).toBe('expired');
+    // The running quote is still open to the customer.
+    expect((await acceptQuote(cust.contact, { quoteId: running.id, poNumber: 'PO-IN-TIME', neededBy: null })).workOrders).toHaveLength(1);
   });
 });
 

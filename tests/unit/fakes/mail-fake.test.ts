@@ -30,10 +30,24 @@ function transport(port: number) {
   return nodemailer.createTransport({ host: '127.0.0.1', port, secure: false, ignoreTLS: true });
 }
 
-async function api<T>(port: number, pathname: string, method = 'GET'): Promise<{ status: number; body: T }> {
-  const res = await fetch(`http://127.0.0.1:${port}${pathname}`, { method });
+async function api<T>(port: number, pathname: string, method = 'GET', body?: unknown): Promise<{ status: number; body: T }> {
+  const res = await fetch(`http://127.0.0.1:${port}${pathname}`, { method, body: body === undefined ? undefined : JSON.stringify(body) });
   return { status: res.status, body: (await res.json()) as T };
 }
+
+type HoldRow = { to: string; waiting: number };
+
+async function untilWaiting(port: number, to: string): Promise<void> {
+  const end = Date.now() + 5000;
+  while (Date.now() < end) {
+    const { body } = await api<HoldRow[]>(port, '/holds');
+    if (body.some((h) => h.to === to && h.waiting > 0)) return;
+    await new Promise((r) => setTimeout(r, 20));
+  }
+  throw new Error(`no message held for ${to}`);
+}
+
+const subjects = async (port: number) => (await api<StoredMessage[]>(port, '/messages')).body.map((m) => m.subject);
 
 const CSV = 'lot,thickness_um\n7,8.2\n';
 
@@ -142,5 +156,67 @@ describe('mail fake', () => {
     const { httpPort } = await start();
     const body = (await api<StoredMessage[]>(httpPort, '/messages')).body;
     expect(body.map((m) => m.id)).toEqual(['msg_ok']);
+  });
+
+  describe('holds', () => {
+    it('keeps the reply to a held recipient back until released, then accepts the message', async () => {
+      const { smtpPort, httpPort } = await start();
+      const created = await api<{ to: string; ms: number; outcome: string }>(httpPort, '/holds', 'POST', { to: 'Slow@Customer.test' });
+      expect(created).toEqual({ status: 201, body: { to: 'slow@customer.test', ms: 60_000, outcome: 'accept' } });
+      let replied = false;
+      const sending = transport(smtpPort)
+        .sendMail({ from: 'a@ampwright.test', to: 'slow@customer.test', subject: 'held', text: 'x' })
+        .finally(() => (replied = true));
+      await untilWaiting(httpPort, 'slow@customer.test');
+      // Others pass while the hold lasts.
+      await transport(smtpPort).sendMail({ from: 'a@ampwright.test', to: 'quick@customer.test', subject: 'free', text: 'y' });
+      expect(replied).toBe(false);
+      expect(await subjects(httpPort)).toEqual(['free']);
+      expect((await api<{ released: number }>(httpPort, '/holds?to=slow@customer.test', 'DELETE')).body.released).toBe(1);
+      await sending;
+      expect(await subjects(httpPort)).toEqual(['held', 'free']);
+      expect((await api<HoldRow[]>(httpPort, '/holds')).body).toEqual([]);
+    });
+
+    it('ends by itself after ms; a reject hold answers 451 and keeps nothing', async () => {
+      const { smtpPort, httpPort } = await start();
+      await api(httpPort, '/holds', 'POST', { to: 'timed@customer.test', ms: 300 });
+      const started = Date.now();
+      await transport(smtpPort).sendMail({ from: 'a@ampwright.test', to: 'timed@customer.test', subject: 'late', text: 'x' });
+      expect(Date.now() - started).toBeGreaterThanOrEqual(250);
+      await api(httpPort, '/holds', 'POST', { to: 'refused@customer.test', outcome: 'reject' });
+      const refused = transport(smtpPort).sendMail({ from: 'a@ampwright.test', to: 'refused@customer.test', subject: 'no', text: 'x' });
+      const outcome = expect(refused).rejects.toMatchObject({ responseCode: 451 });
+      await untilWaiting(httpPort, 'refused@customer.test');
+      await api(httpPort, '/holds', 'DELETE');
+      await outcome;
+      expect(await subjects(httpPort)).toEqual(['late']);
+    });
+
+    it('does not keep a held message whose sender went away before the reply', async () => {
+      const { smtpPort, httpPort } = await start();
+      await api(httpPort, '/holds', 'POST', { to: 'gone@customer.test' });
+      const abort = new AbortController();
+      const sending = transport(smtpPort).sendMail({ from: 'a@ampwright.test', to: 'gone@customer.test', subject: 'lost', text: 'x', signal: abort.signal });
+      const failed = expect(sending).rejects.toThrow();
+      await untilWaiting(httpPort, 'gone@customer.test');
+      abort.abort();
+      await failed;
+      const end = Date.now() + 2000;
+      while ((await api<HoldRow[]>(httpPort, '/holds')).body[0]?.waiting && Date.now() < end) await new Promise((r) => setTimeout(r, 20));
+      await api(httpPort, '/holds', 'DELETE');
+      expect(await subjects(httpPort)).toEqual([]);
+    });
+
+    it('refuses a hold without a valid address or with a bad time', async () => {
+      const { httpPort } = await start();
+      const noAddress = await api<{ error: string }>(httpPort, '/holds', 'POST', { ms: 100 });
+      expect(noAddress.status).toBe(400);
+      expect(noAddress.body.error).toMatch(/^to:/);
+      expect((await api(httpPort, '/holds', 'POST', { to: 'x@y.test', ms: 0 })).status).toBe(400);
+      expect((await api(httpPort, '/holds', 'POST', { to: 'x@y.test', outcome: 'maybe' })).status).toBe(400);
+      expect((await api(httpPort, '/holds', 'PUT')).status).toBe(405);
+      expect((await api<HoldRow[]>(httpPort, '/holds')).body).toEqual([]);
+    });
   });
 });
