@@ -1,6 +1,7 @@
 // Form input for a rate set. Money is typed in dollars and kept in whole cents, parsed exactly
 // from the text (no floating point); more than two decimals is refused, never rounded.
 import { z } from 'zod';
+import { isIsoDate } from '@/lib/billing/dates';
 import { dollarsSchema } from '@/lib/quotes/schemas';
 import { PLATING_METALS } from '@/lib/plating';
 import { numberField } from '@/lib/records/fields';
@@ -24,8 +25,8 @@ export const MONEY_FIELDS = [
 const isoDay = z
   .string({ error: 'Enter the date the rates take effect.' })
   .trim()
-  .regex(/^\d{4}-\d{2}-\d{2}$/, 'Enter the date as YYYY-MM-DD.')
-  .refine((s) => new Date(`${s}T00:00:00Z`).toISOString().slice(0, 10) === s, 'That is not a real date.');
+  .regex(/^\d{4}-\d{2}-\d{2}$/, { error: 'Enter the date as YYYY-MM-DD.', abort: true })
+  .refine(isIsoDate, 'That is not a real date.');
 
 const money = (label: string) =>
   z.preprocess((v) => (typeof v === 'string' && v.trim() === '' ? undefined : v), z.string({ error: `Enter the ${label.toLowerCase()} rate.` }).pipe(dollarsSchema));

@@ -4,6 +4,7 @@
 // that asks for none must be listed in PUBLIC below, or this test fails.
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { type Permission, roleCan } from '@/lib/auth/roles';
+import { actionRequest } from '../helpers/actions';
 import { APP_URL } from '../helpers/browser';
 import { type Caller, CALLERS, TestSessions } from '../helpers/sessions';
 import { type ActionRoute, type ApiRoute, type Guard, type PageRoute, discoverActions, discoverApiRoutes, discoverPages, sampleUrl } from '../helpers/routes';
@@ -93,10 +94,7 @@ describe('route handlers', () => {
 describe('server actions', () => {
   it.each(actions.filter((a) => a.guard.kind === 'permission').map((a) => [`${a.name} (${a.file})`, a] as const))('%s', async (_name, action: ActionRoute) => {
     for (const caller of CALLERS) {
-      const form = new FormData();
-      form.append('0', '[{},"$K1"]'); // (previous state, form data) as React encodes them
-      form.append('1_probe', 'x');
-      const res = await request(caller, sampleUrl(action.pagePattern), { method: 'POST', body: form, headers: { 'next-action': action.id, origin: APP_URL } });
+      const res = await request(caller, sampleUrl(action.pagePattern), actionRequest(action.id, { probe: 'x' }, APP_URL));
       const body = await res.text();
       const where = `${caller} → ${action.name}`;
       expect(res.status, where).toBeLessThan(500);

@@ -34,6 +34,13 @@ export class TestSessions {
     await this.db.end();
   }
 
+  /** The `cookie` header value that signs `caller` in (opened by open()). */
+  cookie(caller: Role): string {
+    const cookie = this.cookies.get(caller);
+    if (!cookie) throw new Error(`no session for ${caller}: call open() first`);
+    return cookie;
+  }
+
   request(caller: Caller, url: string, init: RequestInit = {}): Promise<Response> {
     const headers = new Headers(init.headers);
     const cookie = this.cookies.get(caller);

@@ -97,6 +97,15 @@ describe('rate sets', () => {
     expect(bad.error?.issues.map((i) => i.path[0])).toEqual(['labourPerHour']);
   });
 
+  it('refuses a date that is not one with a message, never an exception', () => {
+    // 'NaN' once reached a Date conversion that throws (found by the hostile-input run).
+    for (const effectiveFrom of ['NaN', '2030-02-30', '2030-13-01', '', '١٢٣٤-٠١-٠١']) {
+      const r = rateSetSchema.safeParse({ ...RATES, effectiveFrom });
+      expect(r.success, effectiveFrom).toBe(false);
+      expect(r.error?.issues.map((i) => i.path[0]), effectiveFrom).toContain('effectiveFrom');
+    }
+  });
+
   it('adds a future set, edits it while scheduled, and keeps the set in force read-only', async () => {
     await inRolledBackTransaction(async (trx) => {
       const owner = await sessionUserByEmail('owner@kestrel-plating.test');
