@@ -38,4 +38,9 @@ export function proxy(req: NextRequest) {
   return NextResponse.next();
 }
 
-export const config = { matcher: ['/((?!_next/static|_next/image|favicon.ico).*)'] };
+// Every page gets its nonce. An API request enters only with an Origin header: without one the check
+// above lets it through anyway, so reads such as the grids' same-origin GETs (browsers send no Origin
+// on those) are spared a proxy pass; sessions and permissions are checked in lib/auth either way.
+export const config = {
+  matcher: ['/((?!api/|_next/static|_next/image|favicon.ico).*)', { source: '/api/:path*', has: [{ type: 'header', key: 'origin' }] }],
+};

@@ -1,19 +1,39 @@
 import 'server-only';
-import { Lucia } from 'lucia';
+import { type DatabaseSession, type DatabaseUser, Lucia } from 'lucia';
 import { NodePostgresAdapter } from '@lucia-auth/adapter-postgresql';
-import { pool } from '@/db';
+import { db, pool } from '@/db';
 import type { Role, UnitSystem } from '@/db/types';
 
-const adapter = new NodePostgresAdapter(pool, { user: 'users', session: 'sessions' });
+// Every signed-in request validates its session. The stock adapter reads it in two queries (the
+// session, then `users.*` joined again by session id); one join that reads only the columns
+// getUserAttributes passes on does it in one round trip and never loads the password hash.
+class SessionAdapter extends NodePostgresAdapter {
+  override async getSessionAndUser(sessionId: string): Promise<[DatabaseSession | null, DatabaseUser | null]> {
+    const row = await db
+      .selectFrom('sessions as s')
+      .innerJoin('users as u', 'u.id', 's.user_id')
+      .select(['s.id', 's.user_id', 's.expires_at', 'u.email', 'u.name', 'u.role', 'u.customer_id', 'u.unit_system', 'u.is_active'])
+      .where('s.id', '=', sessionId)
+      .executeTakeFirst();
+    if (!row) return [null, null];
+    const { id, user_id, expires_at, ...attributes } = row;
+    return [
+      { id, userId: user_id, expiresAt: expires_at, attributes: {} },
+      { id: user_id, attributes },
+    ];
+  }
+}
 
-export const lucia = new Lucia(adapter, {
+export const sessionAdapter = new SessionAdapter(pool, { user: 'users', session: 'sessions' });
+
+export const lucia = new Lucia(sessionAdapter, {
   sessionCookie: {
     name: 'ampwright_session',
     expires: false,
     // Lucia always sets httpOnly; SameSite=Lax; Secure only when the app is served over https.
     attributes: { secure: (process.env.APP_URL ?? '').startsWith('https://'), sameSite: 'lax' },
   },
-  // The adapter returns every column, the password hash included: pass on only what pages need.
+  // Pass on only what pages need.
   getUserAttributes: (a) => ({
     email: a.email,
     name: a.name,

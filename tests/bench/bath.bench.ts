@@ -3,7 +3,7 @@
 // bare INSERT of an analysis row through pg in the same run; and the chart data for five years of
 // daily analyses (one indexed query plus the SPC) against the bare SELECT of the same rows.
 // Run alone with `node --conditions=react-server --import tsx tests/bench/bath.bench.ts`
-// (DATABASE_URL = the test database). Everything it creates is removed at the end.
+// (DATABASE_URL = the bench database). Everything it creates is removed at the end.
 import { randomUUID } from 'node:crypto';
 import { performance } from 'node:perf_hooks';
 import { db, pool } from '@/db';
