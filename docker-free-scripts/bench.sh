@@ -15,4 +15,4 @@ PSQL_DB=postgres bash docker-free-scripts/db.sh psql -qAt -c "select 1 from pg_d
   || PSQL_DB=postgres bash docker-free-scripts/db.sh psql -q -c "create database $bench_db" >/dev/null
 npm run -s db:migrate >/dev/null
 npm run -s db:seed >/dev/null
-exec node --conditions=react-server --import tsx tests/bench/run.ts "$@"
+exec node --import tsx tests/bench/run.ts "$@"

@@ -4,7 +4,7 @@ import { db as defaultDb } from '@/db';
 import type { Analysis, AnalysisSource, Database } from '@/db/types';
 import { AppError } from '@/lib/errors';
 import { assertBathPermission, type BathActor } from './access';
-import { raiseAlert } from './alerts';
+import { raiseAlerts } from './alerts';
 import { getAnalyteWithTank, limitsOf, supplyOf, type AnalyteWithTank } from './analytes';
 import { badInput } from './checks';
 import { evaluateReading, evaluateValue } from './evaluate';
@@ -15,7 +15,7 @@ import type { AnalysisInputs } from './titration';
 import type { Verdict } from './verdict';
 
 // Logging one analysis: validate, compute, judge against the limits and the run rules on the last
-// 30 points, store, and raise alerts — in one transaction. An entry sent twice (same key) is
+// 30 points, store, and raise alerts — the analysis and its alerts in one transaction. An entry sent twice (same key) is
 // stored once; the resend gets the original back. A correction is a new analysis that names the
 // one it supersedes; both stay.
 
@@ -83,10 +83,17 @@ function fromStored(row: Analysis, duplicate: boolean): LoggedAnalysis {
 
 export async function logAnalysis(actor: BathActor, input: LogAnalysisInput, executor: Db = defaultDb): Promise<LoggedAnalysis> {
   assertBathPermission(actor, 'bath.log');
-  const existing = await executor.selectFrom('analyses').selectAll().where('idempotency_key', '=', input.key).executeTakeFirst();
+  // Three reads that do not depend on one another: on the pool they go out at once (one round trip
+  // of waiting instead of three); in a caller's transaction, one after another on its connection.
+  const reads = [
+    () => executor.selectFrom('analyses').selectAll().where('idempotency_key', '=', input.key).executeTakeFirst(),
+    () => getAnalyteWithTank(input.tankId, input.analyteId, executor),
+    () => recentValues(executor, input.analyteId, input.takenAt, RULE_WINDOW - 1, input.supersedesId),
+  ] as const;
+  const [existing, analyte, previous] = executor.isTransaction
+    ? [await reads[0](), await reads[1](), await reads[2]()]
+    : await Promise.all([reads[0](), reads[1](), reads[2]()]);
   if (existing) return fromStored(existing, true);
-
-  const analyte = await getAnalyteWithTank(input.tankId, input.analyteId, executor);
   if (!analyte) throw new AppError('NOT_FOUND', 'That analyte does not belong to this tank.');
   if (!analyte.is_active) throw new AppError('CONFLICT', `${analyte.name} is no longer analysed on this tank.`);
   const subject = {
@@ -104,70 +111,75 @@ export async function logAnalysis(actor: BathActor, input: LogAnalysisInput, exe
   if (!evaluation.ok) throw badInput(evaluation.field, evaluation.message);
   const { value, verdict, recommendation } = evaluation;
 
-  // Inside a caller's transaction (a lab upload: all rows or none) run in it; otherwise open one.
-  const inTransaction = <T>(work: (trx: Db) => Promise<T>): Promise<T> =>
-    executor.isTransaction ? work(executor) : executor.transaction().execute(work);
+  const rules = rulesAtLast([...previous, value]);
+  const store = async (q: Db, rules: RuleId[]): Promise<LoggedAnalysis> => {
+    const row = await q
+      .insertInto('analyses')
+      .values({
+        tank_id: analyte.tank_id,
+        analyte_id: analyte.id,
+        method_id: input.reportedValue !== undefined ? OUTSIDE_LAB_METHOD : analyte.method_id,
+        inputs: JSON.stringify({ ...input.inputs, ...(input.entryUnit ? { entryUnit: input.entryUnit } : {}) }),
+        value,
+        unit: analyte.unit,
+        verdict: verdict.status,
+        severity: verdict.severity,
+        rules,
+        recommendation: recommendation.kind === 'none' ? null : JSON.stringify(recommendation),
+        source: input.source,
+        taken_at: input.takenAt,
+        logged_by: actor.id,
+        idempotency_key: input.key,
+        supersedes_id: input.supersedesId ?? null,
+        note: input.note ?? '',
+      })
+      .onConflict((oc) => oc.column('idempotency_key').doNothing())
+      .returningAll()
+      .executeTakeFirst();
+    if (!row) {
+      // The same entry arrived twice at once: the other request stored it.
+      const original = await q.selectFrom('analyses').selectAll().where('idempotency_key', '=', input.key).executeTakeFirstOrThrow();
+      return fromStored(original, true);
+    }
+    const where = `${analyte.tank_code} ${analyte.tank_name}, ${analyte.name}`;
+    const raised = await raiseAlerts(q, [
+      ...(verdict.status === 'out_of_range'
+        ? [{
+            tankId: analyte.tank_id,
+            analyteId: analyte.id,
+            analysisId: row.id,
+            kind: 'out_of_limits' as const,
+            dedupeKey: `out_of_limits:${analyte.id}`,
+            message: `${where}: ${value.toPrecision(4)} ${analyte.unit}. ${verdict.message}`,
+            detail: { value, unit: analyte.unit, limit: verdict.limit, outOfSpec: verdict.outOfSpec },
+          }]
+        : []),
+      ...(rules.length > 0
+        ? [{
+            tankId: analyte.tank_id,
+            analyteId: analyte.id,
+            analysisId: row.id,
+            kind: 'run_rule' as const,
+            dedupeKey: `run_rule:${analyte.id}`,
+            message: `${where}: ${describeRules(rules)} (last ${RULE_WINDOW} analyses).`,
+            detail: { value, rules },
+          }]
+        : []),
+    ]);
+    const newAlertIds = raised.filter((a) => a.isNew).map((a) => a.id);
+    return { analysis: row, verdict: verdict.status, message: verdict.message, rules, recommendation, newAlertIds, duplicate: false };
+  };
+
   try {
-    return await inTransaction(async (trx) => {
+    // The usual entry (in range, no run rule, not a correction) is one INSERT: nothing else to keep
+    // together with it, so no transaction. Anything more is written in one transaction — the
+    // caller's if it has one (a lab upload: all rows or none).
+    if (!executor.isTransaction && !input.supersedesId && verdict.status !== 'out_of_range' && rules.length === 0) return await store(executor, rules);
+    const work = async (trx: Db) => {
       if (input.supersedesId) await checkSupersedes(trx, analyte, input.supersedesId);
-      const previous = await recentValues(trx, analyte.id, input.takenAt, RULE_WINDOW - 1, input.supersedesId);
-      const rules = rulesAtLast([...previous, value]);
-      const row = await trx
-        .insertInto('analyses')
-        .values({
-          tank_id: analyte.tank_id,
-          analyte_id: analyte.id,
-          method_id: input.reportedValue !== undefined ? OUTSIDE_LAB_METHOD : analyte.method_id,
-          inputs: JSON.stringify({ ...input.inputs, ...(input.entryUnit ? { entryUnit: input.entryUnit } : {}) }),
-          value,
-          unit: analyte.unit,
-          verdict: verdict.status,
-          severity: verdict.severity,
-          rules,
-          recommendation: recommendation.kind === 'none' ? null : JSON.stringify(recommendation),
-          source: input.source,
-          taken_at: input.takenAt,
-          logged_by: actor.id,
-          idempotency_key: input.key,
-          supersedes_id: input.supersedesId ?? null,
-          note: input.note ?? '',
-        })
-        .onConflict((oc) => oc.column('idempotency_key').doNothing())
-        .returningAll()
-        .executeTakeFirst();
-      if (!row) {
-        // The same entry arrived twice at once: the other request stored it.
-        const original = await trx.selectFrom('analyses').selectAll().where('idempotency_key', '=', input.key).executeTakeFirstOrThrow();
-        return fromStored(original, true);
-      }
-      const newAlertIds: string[] = [];
-      const where = `${analyte.tank_code} ${analyte.tank_name}, ${analyte.name}`;
-      if (verdict.status === 'out_of_range') {
-        const a = await raiseAlert(trx, {
-          tankId: analyte.tank_id,
-          analyteId: analyte.id,
-          analysisId: row.id,
-          kind: 'out_of_limits',
-          dedupeKey: `out_of_limits:${analyte.id}`,
-          message: `${where}: ${value.toPrecision(4)} ${analyte.unit}. ${verdict.message}`,
-          detail: { value, unit: analyte.unit, limit: verdict.limit, outOfSpec: verdict.outOfSpec },
-        });
-        if (a.isNew) newAlertIds.push(a.id);
-      }
-      if (rules.length > 0) {
-        const a = await raiseAlert(trx, {
-          tankId: analyte.tank_id,
-          analyteId: analyte.id,
-          analysisId: row.id,
-          kind: 'run_rule',
-          dedupeKey: `run_rule:${analyte.id}`,
-          message: `${where}: ${describeRules(rules)} (last ${RULE_WINDOW} analyses).`,
-          detail: { value, rules },
-        });
-        if (a.isNew) newAlertIds.push(a.id);
-      }
-      return { analysis: row, verdict: verdict.status, message: verdict.message, rules, recommendation, newAlertIds, duplicate: false };
-    });
+      return store(trx, rules);
+    };
+    return await (executor.isTransaction ? work(executor) : executor.transaction().execute(work));
   } catch (e) {
     if (isUniqueViolation(e, 'analyses_supersedes_id_key')) {
       throw new AppError('CONFLICT', 'That analysis has just been corrected by someone else: reload and correct the newest entry.');

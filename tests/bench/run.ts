@@ -1,10 +1,18 @@
 // npm run bench — runs every tests/bench/*.bench.ts module and prints one table. Nothing is
 // asserted on time: each figure stands beside a baseline measured in the same run.
 import { readdirSync } from 'node:fs';
+import { createRequire } from 'node:module';
 import os from 'node:os';
 import path from 'node:path';
 import { pathToFileURL } from 'node:url';
 import type { BenchModule, BenchRow } from './types';
+
+// Server modules start with `import 'server-only'`, which throws outside React Server Components.
+// The benchmarks run in plain Node (the PDF renderer needs React's full build, not the
+// react-server one), so here the guard is an empty module, as vitest's alias makes it in the tests.
+const requireHere = createRequire(__filename);
+const serverOnly = requireHere.resolve('server-only');
+requireHere.cache[serverOnly] = { id: serverOnly, filename: serverOnly, loaded: true, exports: {} } as unknown as NodeJS.Module;
 
 function machine(): string {
   const cpus = os.cpus();
