@@ -74,7 +74,7 @@ beforeAll(async () => {
   console.log(
     `database outage run: stopped at ${(marks.stoppedAt / 1000).toFixed(1)} s, started at ${(marks.startedAt / 1000).toFixed(1)} s, ` +
       `first write stored again at ${(marks.servedAgainAt / 1000).toFixed(1)} s; ${refused.length} answers 503 in ` +
-      `p50 ${refused[Math.floor(refused.length / 2)] ?? NaN} ms, slowest ${refused.at(-1) ?? NaN} ms\n${formatReport(report)}`,
+      `p50 ${refused[Math.floor(refused.length / 2)]?.toFixed(0)} ms, slowest ${refused.at(-1)?.toFixed(0)} ms\n${formatReport(report)}`,
   );
 }, 240_000);
 
