@@ -34,25 +34,17 @@ export type RaiseAlertInput = {
 
 /** Raises an alert, or counts a repeat on the open one with the same key. `isNew` says which. */
 export async function raiseAlert(executor: Kysely<Database>, a: RaiseAlertInput): Promise<{ id: string; isNew: boolean }> {
-  return (await raiseAlerts(executor, [a]))[0]!;
-}
-
-/** raiseAlert for several alerts of different keys in one statement; answers in the order given. */
-export async function raiseAlerts(executor: Kysely<Database>, alerts: readonly RaiseAlertInput[]): Promise<{ id: string; isNew: boolean }[]> {
-  if (alerts.length === 0) return [];
-  const rows = await executor
+  const row = await executor
     .insertInto('bath_alerts')
-    .values(
-      alerts.map((a) => ({
-        tank_id: a.tankId,
-        analyte_id: a.analyteId ?? null,
-        analysis_id: a.analysisId ?? null,
-        kind: a.kind,
-        dedupe_key: a.dedupeKey,
-        message: a.message.slice(0, 1000),
-        detail: JSON.stringify(a.detail ?? {}),
-      })),
-    )
+    .values({
+      tank_id: a.tankId,
+      analyte_id: a.analyteId ?? null,
+      analysis_id: a.analysisId ?? null,
+      kind: a.kind,
+      dedupe_key: a.dedupeKey,
+      message: a.message.slice(0, 1000),
+      detail: JSON.stringify(a.detail ?? {}),
+    })
     .onConflict((oc) =>
       oc
         .column('dedupe_key')
@@ -64,10 +56,9 @@ export async function raiseAlerts(executor: Kysely<Database>, alerts: readonly R
           analysis_id: sql`coalesce(excluded.analysis_id, bath_alerts.analysis_id)`,
         }),
     )
-    .returning(['id', 'dedupe_key', sql<boolean>`(xmax = 0)`.as('inserted')])
-    .execute();
-  const byKey = new Map(rows.map((r) => [r.dedupe_key, { id: r.id, isNew: r.inserted }]));
-  return alerts.map((a) => byKey.get(a.dedupeKey)!);
+    .returning(['id', sql<boolean>`(xmax = 0)`.as('inserted')])
+    .executeTakeFirstOrThrow();
+  return { id: row.id, isNew: row.inserted };
 }
 
 export async function acknowledgeAlert(

@@ -1,10 +1,10 @@
 import 'server-only';
-import type { Kysely } from 'kysely';
+import { sql, type Kysely } from 'kysely';
 import { db as defaultDb } from '@/db';
 import type { Analysis, AnalysisSource, Database } from '@/db/types';
 import { AppError } from '@/lib/errors';
 import { assertBathPermission, type BathActor } from './access';
-import { raiseAlerts } from './alerts';
+import type { RaiseAlertInput } from './alerts';
 import { getAnalyteWithTank, limitsOf, supplyOf, type AnalyteWithTank } from './analytes';
 import { badInput } from './checks';
 import { evaluateReading, evaluateValue } from './evaluate';
@@ -15,9 +15,9 @@ import type { AnalysisInputs } from './titration';
 import type { Verdict } from './verdict';
 
 // Logging one analysis: validate, compute, judge against the limits and the run rules on the last
-// 30 points, store, and raise alerts — the analysis and its alerts in one transaction. An entry sent twice (same key) is
-// stored once; the resend gets the original back. A correction is a new analysis that names the
-// one it supersedes; both stay.
+// 30 points, store, and raise alerts — the analysis and its alerts in one statement. An entry sent
+// twice (same key) is stored once; the resend gets the original back. A correction is a new
+// analysis that names the one it supersedes; both stay.
 
 export type LogAnalysisInput = {
   key: string;
@@ -45,6 +45,7 @@ export type LoggedAnalysis = {
 };
 
 type Db = Kysely<Database>;
+type StoredWithAlerts = Analysis & { raised?: { id: string; inserted: boolean }[] };
 
 /** The method recorded for results reported by an outside laboratory. */
 export const OUTSIDE_LAB_METHOD = 'outside-lab';
@@ -112,8 +113,31 @@ export async function logAnalysis(actor: BathActor, input: LogAnalysisInput, exe
   const { value, verdict, recommendation } = evaluation;
 
   const rules = rulesAtLast([...previous, value]);
-  const store = async (q: Db, rules: RuleId[]): Promise<LoggedAnalysis> => {
-    const row = await q
+  const where = `${analyte.tank_code} ${analyte.tank_name}, ${analyte.name}`;
+  const alerts: Omit<RaiseAlertInput, 'analysisId'>[] = [
+    ...(verdict.status === 'out_of_range'
+      ? [{
+          tankId: analyte.tank_id,
+          analyteId: analyte.id,
+          kind: 'out_of_limits' as const,
+          dedupeKey: `out_of_limits:${analyte.id}`,
+          message: `${where}: ${value.toPrecision(4)} ${analyte.unit}. ${verdict.message}`,
+          detail: { value, unit: analyte.unit, limit: verdict.limit, outOfSpec: verdict.outOfSpec },
+        }]
+      : []),
+    ...(rules.length > 0
+      ? [{
+          tankId: analyte.tank_id,
+          analyteId: analyte.id,
+          kind: 'run_rule' as const,
+          dedupeKey: `run_rule:${analyte.id}`,
+          message: `${where}: ${describeRules(rules)} (last ${RULE_WINDOW} analyses).`,
+          detail: { value, rules },
+        }]
+      : []),
+  ];
+  const store = async (q: Db): Promise<LoggedAnalysis> => {
+    const insert = q
       .insertInto('analyses')
       .values({
         tank_id: analyte.tank_id,
@@ -134,50 +158,39 @@ export async function logAnalysis(actor: BathActor, input: LogAnalysisInput, exe
         note: input.note ?? '',
       })
       .onConflict((oc) => oc.column('idempotency_key').doNothing())
-      .returningAll()
-      .executeTakeFirst();
+      .returningAll();
+    // The analysis and its alerts in one statement: stored together or not at all.
+    const row = alerts.length === 0 ? await insert.executeTakeFirst() : (await sql<StoredWithAlerts>`
+      with a as (${insert}),
+      al as (
+        insert into bath_alerts (tank_id, analyte_id, analysis_id, kind, dedupe_key, message, detail)
+        select v.tank_id::uuid, v.analyte_id::uuid, a.id, v.kind, v.dedupe_key, v.message, v.detail::jsonb
+          from a, (values ${sql.join(alerts.map((x) => sql`(${x.tankId}, ${x.analyteId ?? null}, ${x.kind}, ${x.dedupeKey}, ${x.message.slice(0, 1000)}, ${JSON.stringify(x.detail ?? {})})`))})
+            as v (tank_id, analyte_id, kind, dedupe_key, message, detail)
+        -- As raiseAlert: a repeat while the alert is open counts on it (a literal predicate, to match the partial index).
+        on conflict (dedupe_key) where state <> 'acknowledged' do update set
+          occurrences = bath_alerts.occurrences + 1, last_seen_at = now(), analysis_id = coalesce(excluded.analysis_id, bath_alerts.analysis_id)
+        returning id, (xmax = 0) as inserted
+      )
+      select a.*, (select coalesce(json_agg(al), '[]'::json) from al) as raised from a`.execute(q)).rows[0];
     if (!row) {
       // The same entry arrived twice at once: the other request stored it.
       const original = await q.selectFrom('analyses').selectAll().where('idempotency_key', '=', input.key).executeTakeFirstOrThrow();
       return fromStored(original, true);
     }
-    const where = `${analyte.tank_code} ${analyte.tank_name}, ${analyte.name}`;
-    const raised = await raiseAlerts(q, [
-      ...(verdict.status === 'out_of_range'
-        ? [{
-            tankId: analyte.tank_id,
-            analyteId: analyte.id,
-            analysisId: row.id,
-            kind: 'out_of_limits' as const,
-            dedupeKey: `out_of_limits:${analyte.id}`,
-            message: `${where}: ${value.toPrecision(4)} ${analyte.unit}. ${verdict.message}`,
-            detail: { value, unit: analyte.unit, limit: verdict.limit, outOfSpec: verdict.outOfSpec },
-          }]
-        : []),
-      ...(rules.length > 0
-        ? [{
-            tankId: analyte.tank_id,
-            analyteId: analyte.id,
-            analysisId: row.id,
-            kind: 'run_rule' as const,
-            dedupeKey: `run_rule:${analyte.id}`,
-            message: `${where}: ${describeRules(rules)} (last ${RULE_WINDOW} analyses).`,
-            detail: { value, rules },
-          }]
-        : []),
-    ]);
-    const newAlertIds = raised.filter((a) => a.isNew).map((a) => a.id);
-    return { analysis: row, verdict: verdict.status, message: verdict.message, rules, recommendation, newAlertIds, duplicate: false };
+    const { raised = [], ...analysis } = row as StoredWithAlerts;
+    const newAlertIds = raised.filter((r) => r.inserted).map((r) => r.id);
+    return { analysis, verdict: verdict.status, message: verdict.message, rules, recommendation, newAlertIds, duplicate: false };
   };
 
   try {
-    // The usual entry (in range, no run rule, not a correction) is one INSERT: nothing else to keep
-    // together with it, so no transaction. Anything more is written in one transaction — the
-    // caller's if it has one (a lab upload: all rows or none).
-    if (!executor.isTransaction && !input.supersedesId && verdict.status !== 'out_of_range' && rules.length === 0) return await store(executor, rules);
+    // One statement writes the entry and any alert it raises, so no transaction is needed; a
+    // correction checks what it supersedes in the same transaction as it is written (the caller's,
+    // if it has one: a lab upload is all rows or none).
+    if (!input.supersedesId) return await store(executor);
     const work = async (trx: Db) => {
-      if (input.supersedesId) await checkSupersedes(trx, analyte, input.supersedesId);
-      return store(trx, rules);
+      await checkSupersedes(trx, analyte, input.supersedesId!);
+      return store(trx);
     };
     return await (executor.isTransaction ? work(executor) : executor.transaction().execute(work));
   } catch (e) {
