@@ -4,8 +4,8 @@
 // process that runs the same SQL through pg and answers the same JSON. autocannon drives both with
 // the same connections and duration, after a warm-up, in alternating rounds so that the machine's
 // other load falls on both alike. Adds a shop's history (quote and work-order rows of year 1999, so
-// the first block is full) and removes it at the end. Run alone (after bench.sh's database set-up) with
-// `node --conditions=react-server --import tsx tests/bench/api-lists.bench.ts`.
+// the first block is full) and removes it at the end. Run alone with
+// `npm run bench -- api-lists`.
 import path from 'node:path';
 import autocannon from 'autocannon';
 import { type CompiledQuery, DummyDriver, Kysely, PostgresAdapter, PostgresIntrospector, PostgresQueryCompiler, sql } from 'kysely';
@@ -17,6 +17,7 @@ import { QUOTE_GRID_COLUMNS, quoteGridSelect } from '@/lib/quotes/queries';
 import { TestSessions } from '../helpers/sessions';
 import type { BareRoutes, BareStatement } from './bare-list-server';
 import { ROOT, startApp, startServer } from './next-server';
+import { median } from './stats';
 import type { BenchRow } from './types';
 
 const BARE_PORT = 3302;
@@ -90,7 +91,6 @@ async function load(url: string, cookie: string, seconds: number): Promise<numbe
   return r.requests.total / r.duration;
 }
 
-const median = (xs: number[]) => [...xs].sort((a, b) => a - b)[xs.length >> 1]!;
 const perSecond = (x: number) => `${Math.round(x).toLocaleString('en-US')} req/s`;
 
 export async function run(): Promise<BenchRow[]> {
@@ -148,10 +148,4 @@ export async function run(): Promise<BenchRow[]> {
     await sessions.close();
     await removeHistory();
   }
-}
-
-if (process.argv[1]?.endsWith('api-lists.bench.ts')) {
-  run()
-    .then((rows) => console.table(rows))
-    .finally(() => db.destroy());
 }

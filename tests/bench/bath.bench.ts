@@ -2,14 +2,14 @@
 // judge the run rules on the last 30 points, raise or count an alert, one transaction) against one
 // bare INSERT of an analysis row through pg in the same run; and the chart data for five years of
 // daily analyses (one indexed query plus the SPC) against the bare SELECT of the same rows.
-// Run alone with `node --conditions=react-server --import tsx tests/bench/bath.bench.ts`
-// (DATABASE_URL = the bench database). Everything it creates is removed at the end.
+// Run alone with `npm run bench -- bath`. Everything it creates is removed at the end.
 import { randomUUID } from 'node:crypto';
 import { performance } from 'node:perf_hooks';
 import { db, pool } from '@/db';
 import { getChartData } from '@/lib/bath/chart';
 import { logAnalysis } from '@/lib/bath/log-analysis';
 import { actor, makeTank, removeTank } from '../integration/bath/fixtures';
+import { elapsed, quantile } from './stats';
 import type { BenchRow } from './types';
 
 const LOG_RUNS = 200;
@@ -20,19 +20,11 @@ const DAYS = 5 * 365 + 1;
 const LOG_TARGET_RATIO = 5;
 const CHART_TARGET_MS = 250;
 
-const quantile = (xs: number[], q: number) => {
-  const s = [...xs].sort((a, b) => a - b);
-  return s[Math.min(s.length - 1, Math.floor(q * s.length))]!;
-};
 const ms = (x: number) => `${x.toFixed(2)} ms`;
 
 async function timed(runs: number, work: (i: number) => Promise<unknown>): Promise<number[]> {
   const out: number[] = [];
-  for (let i = 0; i < runs; i++) {
-    const t0 = performance.now();
-    await work(i);
-    out.push(performance.now() - t0);
-  }
+  for (let i = 0; i < runs; i++) out.push(await elapsed(() => work(i)));
   return out;
 }
 
@@ -59,15 +51,10 @@ export async function run(): Promise<BenchRow[]> {
     const bare: number[] = [];
     const usual: number[] = [];
     const logged: number[] = [];
-    const time = async (work: () => Promise<unknown>) => {
-      const t0 = performance.now();
-      await work();
-      return performance.now() - t0;
-    };
     for (let i = 0; i < LOG_RUNS; i++) {
-      bare.push(await time(() => pool.query(insertSql, [tank.id, nickel, new Date(start + (40 + i) * 60_000 + 1), plater.id, `bench-bare-${randomUUID()}`])));
-      usual.push(await time(() => log(40 + i, ph, { reading: 4.85 + (i % 3) * 0.05 })));
-      logged.push(await time(() => log(40 + i, nickel, { buretteMl: 15 })));
+      bare.push(await elapsed(() => pool.query(insertSql, [tank.id, nickel, new Date(start + (40 + i) * 60_000 + 1), plater.id, `bench-bare-${randomUUID()}`])));
+      usual.push(await elapsed(() => log(40 + i, ph, { reading: 4.85 + (i % 3) * 0.05 })));
+      logged.push(await elapsed(() => log(40 + i, nickel, { buretteMl: 15 })));
     }
     await db.deleteFrom('analyses').where('idempotency_key', 'like', 'bench-bare-%').where('tank_id', '=', tank.id).execute();
 
@@ -101,10 +88,4 @@ export async function run(): Promise<BenchRow[]> {
   } finally {
     await removeTank(tank);
   }
-}
-
-if (process.argv[1]?.endsWith('bath.bench.ts')) {
-  run()
-    .then((rows) => console.table(rows))
-    .finally(() => db.destroy());
 }

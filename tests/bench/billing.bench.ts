@@ -1,10 +1,10 @@
 // Benchmark of the invoice PDF: render time of a one-line invoice and of a long one (60 lines,
 // several pages), warm (fonts loaded), as the median of several renders. Run alone with
-// `npx tsx tests/bench/billing.bench.ts`. The renderer is ESM-only, so it is imported dynamically.
-import path from 'node:path';
+// `npm run bench -- billing`. The renderer is ESM-only, so it is imported dynamically.
 import { performance } from 'node:perf_hooks';
 import { createElement } from 'react';
 import type { InvoicePdfData } from '../../lib/billing/pdf/invoice-layout';
+import { medianRender } from './stats';
 import type { BenchRow } from './types';
 
 const RUNS = 9;
@@ -43,27 +43,13 @@ function invoiceWith(lineCount: number): InvoicePdfData {
   };
 }
 
-function median(xs: number[]): number {
-  const s = [...xs].sort((a, b) => a - b);
-  return s[Math.floor(s.length / 2)]!;
-}
-
 export async function run(): Promise<BenchRow[]> {
   const pdf = await import('@react-pdf/renderer');
   const { makeInvoiceDocument } = await import('../../lib/billing/pdf/invoice-layout');
   const Doc = makeInvoiceDocument(pdf);
   const render = (d: InvoicePdfData) => pdf.renderToBuffer(createElement(Doc, { d }) as Parameters<typeof pdf.renderToBuffer>[0]);
 
-  const timeOf = async (d: InvoicePdfData) => {
-    const times: number[] = [];
-    let bytes = 0;
-    for (let i = 0; i < RUNS; i++) {
-      const t0 = performance.now();
-      bytes = (await render(d)).length;
-      times.push(performance.now() - t0);
-    }
-    return { ms: median(times), bytes };
-  };
+  const timeOf = (d: InvoicePdfData) => medianRender(RUNS, () => render(d));
 
   const cold0 = performance.now();
   await render(invoiceWith(1)); // loads and parses the fonts once
@@ -91,16 +77,4 @@ export async function run(): Promise<BenchRow[]> {
       met: ratio <= 10,
     },
   ];
-}
-
-// Standalone when run directly (tsx runs this file as CommonJS, where __filename exists).
-const self = typeof __filename === 'string' ? __filename : '';
-if (self && process.argv[1] && path.resolve(process.argv[1]) === path.resolve(self)) {
-  run().then(
-    (rows) => console.table(rows),
-    (err) => {
-      console.error(err);
-      process.exitCode = 1;
-    },
-  );
 }

@@ -4,7 +4,7 @@
 // and served in the same run with the same next, react and react-dom. The minimal app is generated
 // in .run/bench-empty-next (git-ignored) with a hard-linked copy of our node_modules: a project of
 // its own, so that nothing of ours (proxy.ts, tsconfig paths, next.config) reaches its build. Run alone
-// (after bench.sh's database set-up) with `node --conditions=react-server --import tsx tests/bench/first-load.bench.ts`.
+// with `npm run bench -- first-load`.
 import { execFileSync } from 'node:child_process';
 import { mkdirSync, rmSync, writeFileSync } from 'node:fs';
 import path from 'node:path';
@@ -90,8 +90,4 @@ export async function run(): Promise<BenchRow[]> {
     for (const s of servers.reverse()) await s.stop();
     await sessions.close();
   }
-}
-
-if (process.argv[1]?.endsWith('first-load.bench.ts')) {
-  void run().then((rows) => console.table(rows));
 }

@@ -1,5 +1,5 @@
 // Benchmark of the plating engine: streaming STL analysis against a plain stream read of the same
-// file, its memory growth, and plateCalc throughput. Run alone with `npx tsx tests/bench/plating.bench.ts`.
+// file, its memory growth, and plateCalc throughput. Run alone with `npm run bench -- plating`.
 import { createReadStream, createWriteStream } from 'node:fs';
 import { rm } from 'node:fs/promises';
 import { once } from 'node:events';
@@ -137,16 +137,4 @@ export async function run(): Promise<BenchRow[]> {
   } finally {
     await rm(file, { force: true });
   }
-}
-
-// Standalone when run directly (tsx runs this file as CommonJS, where __filename exists).
-const self = typeof __filename === 'string' ? __filename : '';
-if (self && process.argv[1] && path.resolve(process.argv[1]) === path.resolve(self)) {
-  run().then(
-    (rows) => console.table(rows),
-    (err) => {
-      console.error(err);
-      process.exitCode = 1;
-    },
-  );
 }

@@ -1,11 +1,11 @@
 // Benchmark of the certificate of conformance PDF: render time of a one-page certificate (8
 // readings) and of a long lot (125 readings, 40 printed, two pages), warm, as the median of several
 // renders, beside a one-line page in the same fonts measured in the same run. Run alone with
-// `npx tsx tests/bench/quality.bench.ts`.
-import path from 'node:path';
+// `npm run bench -- quality`.
 import { performance } from 'node:perf_hooks';
 import { buildCertificateContent, type CertificateContent } from '../../lib/quality/certificate-content';
 import { makeLot, reading } from '../unit/quality/lot-factory';
+import { medianRender } from './stats';
 import type { BenchRow } from './types';
 
 const RUNS = 7;
@@ -26,21 +26,7 @@ function content(readings: number): CertificateContent {
   });
 }
 
-function median(xs: number[]): number {
-  const s = [...xs].sort((a, b) => a - b);
-  return s[Math.floor(s.length / 2)]!;
-}
-
-async function timeOf(render: () => Promise<Buffer>): Promise<{ ms: number; bytes: number }> {
-  const times: number[] = [];
-  let bytes = 0;
-  for (let i = 0; i < RUNS; i++) {
-    const t0 = performance.now();
-    bytes = (await render()).length;
-    times.push(performance.now() - t0);
-  }
-  return { ms: median(times), bytes };
-}
+const timeOf = (render: () => Promise<Buffer>) => medianRender(RUNS, render);
 
 export async function run(): Promise<BenchRow[]> {
   const { renderCertificatePdf } = await import('../../lib/quality/certificate-pdf');
@@ -77,16 +63,4 @@ export async function run(): Promise<BenchRow[]> {
       met: two.ms / one.ms <= 4,
     },
   ];
-}
-
-// Standalone when run directly (tsx runs this file as CommonJS, where __filename exists).
-const self = typeof __filename === 'string' ? __filename : '';
-if (self && process.argv[1] && path.resolve(process.argv[1]) === path.resolve(self)) {
-  run().then(
-    (rows) => console.table(rows),
-    (err) => {
-      console.error(err);
-      process.exitCode = 1;
-    },
-  );
 }

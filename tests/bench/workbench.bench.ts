@@ -1,6 +1,6 @@
 // Benchmark of the estimator's workbench: the recompute the page runs on every keystroke
 // (recomputeWorkbench, the same function the client component calls), timed in Node against the
-// 16 ms of one frame at 60 Hz. Run alone with `npx tsx tests/bench/workbench.bench.ts`.
+// 16 ms of one frame at 60 Hz. Run alone with `npm run bench -- workbench`.
 import { analyzeStl, cubeMesh, makeBinaryStl } from '../../lib/plating';
 import { defaultForm, type WorkbenchForm } from '../../lib/estimating/form-state';
 import { recomputeWorkbench } from '../../lib/estimating/recompute';
@@ -51,6 +51,3 @@ export async function run(): Promise<BenchRow[]> {
 }
 
 // Alone: print the rows.
-if (process.argv[1]?.endsWith('workbench.bench.ts')) {
-  void run().then((rows) => console.table(rows));
-}

@@ -7,10 +7,7 @@ import os from 'node:os';
 import path from 'node:path';
 import pg from 'pg';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { createDb } from '@/db/kysely';
-import { migrateToLatest } from '@/db/migrate';
-import { createPool } from '@/db/pool';
-import { seedDemo } from '@/lib/seed';
+import { prepareTestDatabase } from '../helpers/test-db';
 
 const server = process.env.DATABASE_URL!.slice(0, process.env.DATABASE_URL!.lastIndexOf('/'));
 const sourceName = `ampwright_backup_src_${process.pid}`;
@@ -53,14 +50,7 @@ async function admin(sqlText: string): Promise<void> {
 
 beforeAll(async () => {
   await admin(`create database "${sourceName}"`);
-  const db = createDb(createPool(url));
-  try {
-    const { error } = await migrateToLatest(db);
-    if (error) throw error;
-    await seedDemo(db);
-  } finally {
-    await db.destroy();
-  }
+  await prepareTestDatabase(url);
 }, 120_000);
 
 afterAll(async () => {
