@@ -1,8 +1,11 @@
 import type { Browser } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import pg from 'pg';
+import { hashPassword } from '@/lib/auth/password';
 import { DEMO_PASSWORD } from '@/lib/seed';
 import { APP_URL, launchBrowser, screenshot, signInAs } from '../helpers/browser';
 import { firstLink, waitForMessage } from '../helpers/mailbox';
+import { TEST_DATABASE_URL } from '../helpers/test-db';
 
 let browser: Browser;
 beforeAll(async () => {
@@ -106,6 +109,10 @@ describe('signing in', () => {
       await screenshot(again, 'reset-link-used');
     } finally {
       await context.close();
+      // Other files sign in as this demo contact with the demo password: give it back.
+      const client = new pg.Client({ connectionString: TEST_DATABASE_URL });
+      await client.connect();
+      await client.query('update users set password_hash = $1 where email = $2', [await hashPassword(DEMO_PASSWORD), email]).finally(() => client.end());
     }
   });
 });
