@@ -1,8 +1,8 @@
 // Tables of migration 2026_12_01_2250_create_billing.
 import type { Generated, Selectable } from 'kysely';
-import type { DateColumn, Numeric, Timestamp, TimestampNullable } from './columns';
+import type { DateColumn, Json, Numeric, Timestamp, TimestampNullable } from './columns';
 
-export type InvoiceStatus = 'issued' | 'partly_paid' | 'paid' | 'credited';
+export type InvoiceStatus = 'issued' | 'partly_paid' | 'paid' | 'overpaid' | 'credited';
 export type InvoiceLineKind = 'work_order' | 'rush' | 'expedite' | 'rework' | 'other';
 export type PaymentKind = 'payment' | 'refund';
 export type PaymentMethod = 'card' | 'check' | 'bank_transfer';
@@ -103,7 +103,52 @@ export type InvoiceRemindersTable = {
   sent_at: Timestamp;
 };
 
+// Tables of migration 2026_12_03_0900_create_payment_exceptions.
+export type CreditApplicationsTable = {
+  id: Generated<string>;
+  customer_id: string;
+  from_invoice_id: string;
+  to_invoice_id: string;
+  amount_cents: number;
+  note: Generated<string>;
+  applied_by: string | null;
+  created_at: Timestamp;
+};
+
+export type PaymentExceptionReason =
+  | 'amount_differs'
+  | 'wrong_currency'
+  | 'unknown_invoice'
+  | 'other_customer'
+  | 'credited_invoice'
+  | 'already_paid'
+  | 'overpaid'
+  | 'refund_exceeds_payments';
+
+export type PaymentExceptionsTable = {
+  id: Generated<string>;
+  reason: PaymentExceptionReason;
+  message: string;
+  amount_cents: number;
+  currency: string;
+  invoice_id: string | null;
+  customer_id: string | null;
+  payment_id: string | null;
+  source: 'stripe' | 'office';
+  stripe_event_id: string | null;
+  stripe_payment_intent_id: string | null;
+  payload: Json<Record<string, unknown>>;
+  status: Generated<'open' | 'resolved'>;
+  resolution: string | null;
+  resolved_by: string | null;
+  resolved_at: TimestampNullable;
+  owner_notified_at: TimestampNullable;
+  created_at: Timestamp;
+};
+
 export type BillingTables = {
+  credit_applications: CreditApplicationsTable;
+  payment_exceptions: PaymentExceptionsTable;
   invoices: InvoicesTable;
   invoice_lines: InvoiceLinesTable;
   credit_notes: CreditNotesTable;
@@ -117,3 +162,4 @@ export type Invoice = Selectable<InvoicesTable>;
 export type InvoiceLine = Selectable<InvoiceLinesTable>;
 export type CreditNote = Selectable<CreditNotesTable>;
 export type Payment = Selectable<PaymentsTable>;
+export type PaymentException = Selectable<PaymentExceptionsTable>;

@@ -78,10 +78,15 @@ export function openBalanceCents(b: Balance): number {
   return b.totalCents - b.creditedCents - b.paidCents;
 }
 
+/** Money received on an invoice beyond what it asks: the customer's credit on account. */
+export function excessCents(b: Balance): number {
+  return Math.max(0, -openBalanceCents(b));
+}
+
 /** The status follows from the amounts alone, so replayed or reordered events cannot skew it. */
 export function invoiceStatus(b: Balance): InvoiceStatus {
   const open = openBalanceCents(b);
-  if (b.paidCents > 0) return open <= 0 ? 'paid' : 'partly_paid';
+  if (b.paidCents > 0) return open < 0 ? 'overpaid' : open === 0 ? 'paid' : 'partly_paid';
   if (b.creditedCents > 0 && open <= 0) return 'credited';
   // A zero invoice (rework at no charge only) has nothing due.
   return open <= 0 ? 'paid' : 'issued';
@@ -91,6 +96,7 @@ export const STATUS_WORDS: Record<InvoiceStatus, string> = {
   issued: 'Issued',
   partly_paid: 'Partly paid',
   paid: 'Paid',
+  overpaid: 'Overpaid',
   credited: 'Credited',
 };
 

@@ -6,6 +6,7 @@ import { appUrl } from '@/lib/email/mailer';
 import { AppError } from '@/lib/errors';
 import { recordCardPayment } from './card-payments';
 import { sendReceiptEmail } from './emails';
+import { notifyOwnersOfException } from './exceptions';
 import { getInvoiceDetail } from './queries';
 import { paymentServiceError, stripeClient } from './stripe';
 
@@ -109,12 +110,16 @@ export async function confirmCheckoutReturn(user: SessionUser, invoiceId: string
   const result = await db.transaction().execute((trx) =>
     recordCardPayment(trx, {
       invoiceId,
+      customerId: typeof session.metadata?.customer_id === 'string' ? session.metadata.customer_id : null,
+      checkoutSessionId: session.id,
       paymentIntentId: intent,
       chargeId: null,
       amountCents: session.amount_total ?? 0,
       currency: session.currency ?? '',
       receivedAt: new Date(),
+      evidence: { eventId: null, payload: session },
     }),
   );
   if (result.isNew && result.paymentId) await sendReceiptEmail(result.paymentId);
+  if (result.exceptionId) await notifyOwnersOfException(result.exceptionId);
 }

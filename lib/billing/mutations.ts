@@ -161,16 +161,20 @@ export async function issueCreditNote(actorId: string | null, input: CreditNoteI
   });
 }
 
-export async function recordManualPayment(actorId: string | null, input: ManualPaymentInput, database: Kysely<Database> = defaultDb): Promise<{ id: string }> {
+export async function recordManualPayment(actorId: string | null, input: Omit<ManualPaymentInput, 'acceptExcess'> & { acceptExcess?: boolean }, database: Kysely<Database> = defaultDb): Promise<{ id: string }> {
   if (daysBetweenIso(todayIso(), input.receivedOn) > 0) {
     throw new AppError('BAD_INPUT', 'A payment cannot be received in the future.', { receivedOn: ['Use today or an earlier date.'] });
   }
   return database.transaction().execute(async (trx) => {
     const invoice = await lockInvoiceOrThrow(trx, input.invoiceId);
-    const open = openBalanceCents({ totalCents: invoice.total_cents, paidCents: invoice.paid_cents, creditedCents: invoice.credited_cents });
-    if (input.amount > open) {
-      throw new AppError('BAD_INPUT', open > 0 ? `The open balance is ${formatMoney(open)}; record at most that.` : `Invoice ${invoice.number} has nothing open.`, {
-        amount: [open > 0 ? `Enter at most ${formatMoney(open)}.` : 'Nothing is open on this invoice.'],
+    const open = Math.max(0, openBalanceCents({ totalCents: invoice.total_cents, paidCents: invoice.paid_cents, creditedCents: invoice.credited_cents }));
+    // Money that arrived is recorded; more than the balance only once the office confirms it, and
+    // the excess is then the customer's credit on account.
+    if (input.amount > open && !input.acceptExcess) {
+      const excess = formatMoney(input.amount - open);
+      throw new AppError('BAD_INPUT', `That is ${excess} more than the open balance of ${formatMoney(open)}. Tick "Keep the excess as credit on account" to record it all.`, {
+        amount: [`${excess} above the open balance of ${formatMoney(open)}.`],
+        acceptExcess: ['Tick to record the excess as credit on account.'],
       });
     }
     const payment = await trx
@@ -191,7 +195,13 @@ export async function recordManualPayment(actorId: string | null, input: ManualP
     await refreshInvoiceBalance(trx, invoice.id);
     await trx
       .insertInto('audit_log')
-      .values({ actor_id: actorId, action: 'invoice.payment', entity: 'invoice', entity_id: invoice.id, detail: JSON.stringify({ amountCents: input.amount, method: input.method }) })
+      .values({
+        actor_id: actorId,
+        action: 'invoice.payment',
+        entity: 'invoice',
+        entity_id: invoice.id,
+        detail: JSON.stringify({ amountCents: input.amount, method: input.method, excessCents: Math.max(0, input.amount - open) }),
+      })
       .execute();
     return payment;
   });

@@ -39,6 +39,7 @@ export async function portalInvoiceJson(user: SessionUser, invoiceId: string) {
     creditedCents: s.creditedCents,
     paidCents: s.paidCents,
     openCents: s.openCents,
+    creditOnAccountCents: s.excessCents,
     lines: d.lines.map((l) => ({ lineNo: l.line_no, description: l.description, quantity: Number(l.quantity), unit: l.unit, unitPriceCents: Number(l.unit_price_cents), amountCents: l.amount_cents })),
     creditNotes: d.creditNotes.map((c) => ({ number: c.number, amountCents: c.amount_cents, reason: c.reason, issuedOn: c.issued_on })),
     payments: d.payments.map((p) => ({ kind: p.kind, method: p.method, amountCents: p.amount_cents, receivedAt: p.received_at })),

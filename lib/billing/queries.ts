@@ -23,7 +23,10 @@ export type InvoiceSummary = {
   totalCents: number;
   paidCents: number;
   creditedCents: number;
+  /** What is still owed; negative when the customer paid more (the excess is credit on account). */
   openCents: number;
+  /** Money beyond the balance, held as the customer's credit on account. */
+  excessCents: number;
   isOverdue: boolean;
   currency: string;
 };
@@ -55,6 +58,7 @@ function toSummary(r: SummaryRow, today: string): InvoiceSummary {
     paidCents: r.paid_cents,
     creditedCents: r.credited_cents,
     openCents,
+    excessCents: Math.max(0, -openCents),
     isOverdue: openCents > 0 && dueOn < today,
     currency: r.currency,
   };
@@ -83,7 +87,7 @@ export async function getInvoiceDetail(scope: InvoiceScope, invoiceId: string, d
   if (scope !== 'staff') q = q.where('i.customer_id', '=', scope.customerId);
   const invoice = await q.executeTakeFirst();
   if (!invoice) return null;
-  const [lines, creditNotes, payments, declines, customer] = await Promise.all([
+  const [lines, creditNotes, payments, declines, customer, creditMoves] = await Promise.all([
     database.selectFrom('invoice_lines').selectAll().where('invoice_id', '=', invoice.id).orderBy('line_no').execute(),
     database.selectFrom('credit_notes').selectAll().where('invoice_id', '=', invoice.id).orderBy('created_at').execute(),
     database.selectFrom('payments').selectAll().where('invoice_id', '=', invoice.id).orderBy('received_at').orderBy('created_at').execute(),
@@ -96,10 +100,18 @@ export async function getInvoiceDetail(scope: InvoiceScope, invoiceId: string, d
       .limit(5)
       .execute(),
     database.selectFrom('customers').select(['id', 'name', 'code']).where('id', '=', invoice.customer_id).executeTakeFirstOrThrow(),
+    database
+      .selectFrom('credit_applications as a')
+      .innerJoin('invoices as f', 'f.id', 'a.from_invoice_id')
+      .innerJoin('invoices as t', 't.id', 'a.to_invoice_id')
+      .select(['a.id', 'a.amount_cents', 'a.note', 'a.created_at', 'a.from_invoice_id', 'a.to_invoice_id', 'f.number as from_number', 't.number as to_number'])
+      .where((eb) => eb.or([eb('a.from_invoice_id', '=', invoice.id), eb('a.to_invoice_id', '=', invoice.id)]))
+      .orderBy('a.created_at')
+      .execute(),
   ]);
   const today = todayIso();
   const summary = toSummary({ ...invoice, customer_name: customer.name }, today);
-  return { invoice, summary, customer, lines, creditNotes, payments, declines };
+  return { invoice, summary, customer, lines, creditNotes, payments, declines, creditMoves };
 }
 
 export type InvoiceDetail = NonNullable<Awaited<ReturnType<typeof getInvoiceDetail>>>;
@@ -108,9 +120,23 @@ export async function findReminders(invoiceId: string, database: Kysely<Database
   return database.selectFrom('invoice_reminders').selectAll().where('invoice_id', '=', invoiceId).orderBy('sent_at').execute();
 }
 
-export async function receivablesReport(asOf: string = todayIso(), database: Kysely<Database> = defaultDb): Promise<AgingReport> {
-  const rows = await summaryQuery(database).where('i.status', 'in', ['issued', 'partly_paid']).execute();
-  return ageReceivables(
+export type ReceivablesReport = AgingReport & { credits: { customerId: string; customerName: string; creditCents: number }[]; creditCents: number };
+
+/** The aging of what is owed, beside each customer's credit on account (overpayments not yet refunded or applied). */
+export async function receivablesReport(asOf: string = todayIso(), database: Kysely<Database> = defaultDb): Promise<ReceivablesReport> {
+  const [rows, creditRows] = await Promise.all([
+    summaryQuery(database).where('i.status', 'in', ['issued', 'partly_paid']).execute(),
+    database
+      .selectFrom('invoices as i')
+      .innerJoin('customers as c', 'c.id', 'i.customer_id')
+      .select(['i.customer_id', 'c.name', sql<number>`sum(i.paid_cents + i.credited_cents - i.total_cents)::bigint`.as('credit')])
+      .where('i.status', '=', 'overpaid')
+      .groupBy(['i.customer_id', 'c.name'])
+      .orderBy('c.name')
+      .execute(),
+  ]);
+  const credits = creditRows.map((r) => ({ customerId: r.customer_id, customerName: r.name, creditCents: Number(r.credit) }));
+  const aging = ageReceivables(
     rows.map((r) => toSummary(r, asOf)).map((s) => ({
       invoiceId: s.id,
       number: s.number,
@@ -121,6 +147,7 @@ export async function receivablesReport(asOf: string = todayIso(), database: Kys
     })),
     asOf,
   );
+  return { ...aging, credits, creditCents: credits.reduce((t, c) => t + c.creditCents, 0) };
 }
 
 /** The shop's own name and address, printed on invoices (settings key 'shop'). */

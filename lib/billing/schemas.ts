@@ -1,6 +1,6 @@
 // Form and API input for invoicing; shared by server actions, route handlers and tests.
 import { z } from 'zod';
-import { dollarsSchema } from '@/lib/quotes/schemas';
+import { checkbox, dollarsSchema } from '@/lib/quotes/schemas';
 import { isIsoDate } from './dates';
 
 const id = (what: string) => z.uuid({ error: `Choose ${what}.` });
@@ -64,7 +64,34 @@ export const manualPaymentSchema = z.object({
   method: z.enum(['check', 'bank_transfer'], { error: 'Choose how it was paid.' }),
   reference: optionalText(200),
   receivedOn: isoDay('date received'),
+  // More than the open balance is recorded only when the office says so; the excess is credit on account.
+  acceptExcess: checkbox.default(false),
 });
 export type ManualPaymentInput = z.infer<typeof manualPaymentSchema>;
 
 export const invoiceRefSchema = z.object({ invoiceId: id('an invoice') });
+
+export const applyCreditSchema = z
+  .object({
+    fromInvoiceId: id('the invoice that holds the credit'),
+    toInvoiceId: id('an open invoice to apply it to'),
+    amount: dollarsSchema.refine((c) => c > 0, 'Enter an amount above zero.'),
+    note: optionalText(500),
+  })
+  .refine((v) => v.fromInvoiceId !== v.toInvoiceId, { path: ['toInvoiceId'], message: 'Choose another invoice than the one holding the credit.' });
+export type ApplyCreditInput = z.infer<typeof applyCreditSchema>;
+
+export const refundExcessSchema = z.object({
+  invoiceId: id('an invoice'),
+  amount: dollarsSchema.refine((c) => c > 0, 'Enter an amount above zero.'),
+  method: z.enum(['card', 'check', 'bank_transfer'], { error: 'Choose how the money goes back.' }),
+  reference: optionalText(200),
+});
+export type RefundExcessInput = z.infer<typeof refundExcessSchema>;
+
+export const resolveExceptionSchema = z.object({
+  exceptionId: id('a payment exception'),
+  action: z.enum(['refund', 'keep'], { error: 'Choose what to do with the payment.' }),
+  note: z.string().trim().max(500, 'Use at most 500 characters.').default(''),
+});
+export type ResolveExceptionInput = z.infer<typeof resolveExceptionSchema>;

@@ -5,6 +5,7 @@ import { db as defaultDb } from '@/db';
 import type { Database } from '@/db/types';
 import { recordCardPayment, recordCardRefund, type RecordResult } from './card-payments';
 import { sendReceiptEmail } from './emails';
+import { notifyOwnersOfException } from './exceptions';
 import { isUuid } from './orders';
 import { verifyStripeSignature } from './stripe';
 
@@ -13,13 +14,19 @@ import { verifyStripeSignature } from './stripe';
 
 type Trx = Transaction<Database>;
 
-export type EventResult = { duplicate: boolean; outcome: string; invoiceId: string | null; newPaymentId: string | null };
+export type EventResult = { duplicate: boolean; outcome: string; invoiceId: string | null; newPaymentId: string | null; exceptionId: string | null };
 
 const idOf = (v: string | { id: string } | null | undefined): string | null => (typeof v === 'string' ? v : (v?.id ?? null));
 const atOf = (event: Stripe.Event) => new Date(event.created * 1000);
 
+/** The invoice id the metadata names, when it is a well-formed id; anything else names no invoice. */
 function metaInvoiceId(metadata: Stripe.Metadata | null | undefined): string | null {
   const id = metadata?.invoice_id;
+  return isUuid(id) ? id : null;
+}
+
+function metaCustomerId(metadata: Stripe.Metadata | null | undefined): string | null {
+  const id = metadata?.customer_id;
   return isUuid(id) ? id : null;
 }
 
@@ -37,17 +44,34 @@ async function applyEvent(trx: Trx, event: Stripe.Event): Promise<RecordResult> 
   switch (event.type) {
     case 'checkout.session.completed': {
       const s = event.data.object;
-      const invoiceId = metaInvoiceId(s.metadata);
       const intent = idOf(s.payment_intent);
-      if (!invoiceId) return ignored('no invoice in the session metadata');
-      if (s.payment_status !== 'paid' || !intent) return { ...ignored('session complete, payment not yet received'), invoiceId };
-      return recordCardPayment(trx, { invoiceId, paymentIntentId: intent, chargeId: null, amountCents: s.amount_total ?? 0, currency: s.currency ?? '', receivedAt: atOf(event) });
+      if (s.payment_status !== 'paid' || !intent) return { ...ignored('session complete, payment not yet received'), invoiceId: metaInvoiceId(s.metadata) };
+      return recordCardPayment(trx, {
+        invoiceId: metaInvoiceId(s.metadata),
+        customerId: metaCustomerId(s.metadata),
+        askedCents: null,
+        checkoutSessionId: s.id,
+        paymentIntentId: intent,
+        chargeId: null,
+        amountCents: s.amount_total ?? 0,
+        currency: s.currency ?? '',
+        receivedAt: atOf(event),
+        evidence: { eventId: event.id, payload: s },
+      });
     }
     case 'payment_intent.succeeded': {
       const pi = event.data.object;
-      const invoiceId = metaInvoiceId(pi.metadata);
-      if (!invoiceId) return ignored('no invoice in the payment metadata');
-      return recordCardPayment(trx, { invoiceId, paymentIntentId: pi.id, chargeId: idOf(pi.latest_charge), amountCents: pi.amount_received, currency: pi.currency, receivedAt: atOf(event) });
+      return recordCardPayment(trx, {
+        invoiceId: metaInvoiceId(pi.metadata),
+        customerId: metaCustomerId(pi.metadata),
+        askedCents: Number.isSafeInteger(pi.amount) ? pi.amount : null,
+        paymentIntentId: pi.id,
+        chargeId: idOf(pi.latest_charge),
+        amountCents: pi.amount_received,
+        currency: pi.currency,
+        receivedAt: atOf(event),
+        evidence: { eventId: event.id, payload: pi },
+      });
     }
     case 'payment_intent.payment_failed': {
       const pi = event.data.object;
@@ -59,15 +83,18 @@ async function applyEvent(trx: Trx, event: Stripe.Event): Promise<RecordResult> 
       const ch = event.data.object;
       const intent = idOf(ch.payment_intent);
       const invoiceId = await invoiceOfIntent(trx, ch.metadata, intent);
-      if (!invoiceId || !intent) return ignored('refund of a charge that is not for an invoice');
+      if (!intent) return ignored('refund of a charge with no payment intent');
+      if (!invoiceId) return ignored('refund of a charge that is not for an invoice');
       return recordCardRefund(trx, {
         invoiceId,
+        customerId: metaCustomerId(ch.metadata),
         paymentIntentId: intent,
         chargeId: ch.id,
         amountCents: ch.amount_captured || ch.amount,
         refundedTotalCents: ch.amount_refunded,
         currency: ch.currency,
         receivedAt: atOf(event),
+        evidence: { eventId: event.id, payload: ch },
       });
     }
     default:
@@ -83,7 +110,7 @@ export async function processStripeEvent(event: Stripe.Event, database: Kysely<D
       .onConflict((oc) => oc.column('id').doNothing())
       .returning('id')
       .executeTakeFirst();
-    if (!fresh) return { duplicate: true, outcome: 'already processed', invoiceId: null, newPaymentId: null };
+    if (!fresh) return { duplicate: true, outcome: 'already processed', invoiceId: null, newPaymentId: null, exceptionId: null };
     const result = await applyEvent(trx, event);
     const invoiceExists = result.invoiceId
       ? !!(await trx.selectFrom('invoices').select('id').where('id', '=', result.invoiceId).executeTakeFirst())
@@ -98,14 +125,16 @@ export async function processStripeEvent(event: Stripe.Event, database: Kysely<D
       outcome: result.note,
       invoiceId: result.invoiceId,
       newPaymentId: result.isNew && result.note.startsWith('payment') ? result.paymentId : null,
+      exceptionId: result.exceptionId ?? null,
     };
   });
 }
 
-/** The whole webhook: verify, process once, then (after commit) e-mail a receipt for a new payment. */
+/** The whole webhook: verify, process once, then (after commit) e-mail a receipt and tell the owner of an exception. */
 export async function handleStripeWebhook(rawBody: string, signature: string | null): Promise<EventResult> {
   const event = verifyStripeSignature(rawBody, signature);
   const result = await processStripeEvent(event);
   if (result.newPaymentId) await sendReceiptEmail(result.newPaymentId);
+  if (result.exceptionId) await notifyOwnersOfException(result.exceptionId);
   return result;
 }

@@ -4,7 +4,7 @@ import { PRICING_BASES } from './basis';
 
 const id = (what: string) => z.uuid({ error: `Choose ${what}.` });
 const optionalText = (max: number) => z.string().trim().max(max, `Use at most ${max} characters.`).default('');
-const checkbox = z.preprocess((v) => v === 'on' || v === 'true' || v === true, z.boolean());
+export const checkbox = z.preprocess((v) => v === 'on' || v === 'true' || v === true, z.boolean());
 
 /** Dollars as typed ("1,234.50", "$80") to whole cents, exactly (no floating point). */
 export const dollarsSchema = z

@@ -5,7 +5,16 @@ import { redirect } from 'next/navigation';
 import { formAction } from '@/lib/action';
 import { sendInvoiceEmail } from '@/lib/billing/emails';
 import { issueCreditNote, issueInvoice, recordManualPayment } from '@/lib/billing/mutations';
-import { creditNoteSchema, invoiceRefSchema, issueInvoiceSchema, manualPaymentSchema } from '@/lib/billing/schemas';
+import { applyCredit, refundExcess, resolvePaymentException } from '@/lib/billing/credit';
+import {
+  applyCreditSchema,
+  creditNoteSchema,
+  invoiceRefSchema,
+  issueInvoiceSchema,
+  manualPaymentSchema,
+  refundExcessSchema,
+  resolveExceptionSchema,
+} from '@/lib/billing/schemas';
 
 export const issueInvoiceAction = formAction('invoices.issue', issueInvoiceSchema, async (input, user) => {
   const invoice = await issueInvoice(user.id, input);
@@ -24,7 +33,26 @@ export const creditNoteAction = formAction('invoices.issue', creditNoteSchema, a
 export const recordPaymentAction = formAction('invoices.issue', manualPaymentSchema, async (input, user) => {
   await recordManualPayment(user.id, input);
   revalidatePath(`/invoices/${input.invoiceId}`);
-  return { ok: true, message: 'Payment recorded.' };
+  return { ok: true, message: input.acceptExcess ? 'Payment recorded; anything above the balance is credit on account.' : 'Payment recorded.' };
+});
+
+export const applyCreditAction = formAction('invoices.issue', applyCreditSchema, async (input, user) => {
+  await applyCredit(user.id, input);
+  revalidatePath(`/invoices/${input.fromInvoiceId}`);
+  revalidatePath(`/invoices/${input.toInvoiceId}`);
+  return { ok: true, message: 'Credit applied.' };
+});
+
+export const refundExcessAction = formAction('invoices.issue', refundExcessSchema, async (input, user) => {
+  const result = await refundExcess(user.id, input);
+  revalidatePath(`/invoices/${input.invoiceId}`);
+  return { ok: true, message: result.message };
+});
+
+export const resolveExceptionAction = formAction('invoices.issue', resolveExceptionSchema, async (input, user) => {
+  const result = await resolvePaymentException(user.id, input);
+  revalidatePath('/invoices/exceptions');
+  return { ok: true, message: result.message };
 });
 
 export const resendInvoiceAction = formAction('invoices.issue', invoiceRefSchema, async (input) => {

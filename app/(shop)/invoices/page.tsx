@@ -14,6 +14,7 @@ const FILTERS: { key: string; label: string; filter: InvoiceFilter['status'] }[]
   { key: 'open', label: 'Open', filter: 'open' },
   { key: 'overdue', label: 'Overdue', filter: 'overdue' },
   { key: 'paid', label: 'Paid', filter: 'paid' },
+  { key: 'overpaid', label: 'Overpaid (credit on account)', filter: 'overpaid' },
   { key: 'all', label: 'All', filter: undefined },
 ];
 

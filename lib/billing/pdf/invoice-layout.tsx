@@ -171,7 +171,7 @@ export function makeInvoiceDocument(pdf: ReactPdfModule): InvoiceDocumentCompone
               </View>
             ) : null}
             <View style={s.due}>
-              <Text>{d.openCents < 0 ? 'Credit balance' : 'Balance due'}</Text>
+              <Text>{d.openCents < 0 ? 'Credit on account' : 'Balance due'}</Text>
               <Money cents={Math.abs(d.openCents)} />
             </View>
           </View>
@@ -194,7 +194,7 @@ export function makeInvoiceDocument(pdf: ReactPdfModule): InvoiceDocumentCompone
           ) : null}
           <View style={s.block} wrap={false}>
             <Text style={s.label}>How to pay</Text>
-            <Text>{d.openCents > 0 ? `Pay online by card at ${d.payUrl}, or quote ${d.number} with your payment.` : 'Nothing is due on this invoice.'}</Text>
+            <Text>{d.openCents > 0 ? `Pay online by card at ${d.payUrl}, or quote ${d.number} with your payment.` : d.openCents < 0 ? 'Nothing is due on this invoice; the amount paid above it is your credit on account.' : 'Nothing is due on this invoice.'}</Text>
             <Text style={[s.muted, { marginTop: 8 }]}>Rounding: {d.roundingRule}</Text>
           </View>
 

@@ -9,7 +9,9 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { POST } from '@/app/api/webhooks/stripe/route';
 import { db } from '@/db';
 import { startInvoiceCheckout } from '@/lib/billing/checkout';
-import { issueInvoice } from '@/lib/billing/mutations';
+import { refundExcess, resolvePaymentException } from '@/lib/billing/credit';
+import { todayIso } from '@/lib/billing/dates';
+import { issueInvoice, recordManualPayment } from '@/lib/billing/mutations';
 import { stripeClient } from '@/lib/billing/stripe';
 import { startStripeFake, type StripeFake } from '../../../docker-free-scripts/fakes/stripe-fake';
 import { customerId, makeOrder, NGF_BUYER, OWNER, sessionUser } from './fixtures';
@@ -104,6 +106,55 @@ describe('paying an invoice through the local Stripe fake', () => {
     const pi = (await stripeClient().checkout.sessions.retrieve(sessionId)).payment_intent as string;
     await stripeClient().refunds.create({ payment_intent: pi, amount: 5_000 });
     expect(await invoice()).toEqual({ status: 'partly_paid', paid_cents: 14_841 });
+  });
+
+  it('refunds credit on account to the card once, though the refund also comes back as an event', async () => {
+    const owner = await sessionUser(OWNER);
+    const buyer = await sessionUser(NGF_BUYER);
+    const o = await makeOrder({ customer: 'NGF', quantity: 1000, unitPriceCents: 18.5 });
+    const inv = await issueInvoice(owner.id, { customerId: await customerId('NGF'), orderIds: [o.id], extras: [] });
+    const { url } = await startInvoiceCheckout(buyer, inv.id);
+    expect((await submitCard(url, '4242424242424242')).status).toBe(303);
+    // The customer's check for the same invoice arrives too: the office confirms it as credit.
+    await recordManualPayment(owner.id, { invoiceId: inv.id, amount: 19_841, method: 'check', reference: 'Check 77', receivedOn: todayIso(), acceptExcess: true });
+    const invoice = () => db.selectFrom('invoices').select(['status', 'paid_cents']).where('id', '=', inv.id).executeTakeFirstOrThrow();
+    expect(await invoice()).toEqual({ status: 'overpaid', paid_cents: 39_682 });
+
+    const result = await refundExcess(owner.id, { invoiceId: inv.id, amount: 19_841, method: 'card', reference: '' });
+    expect(result.message).toMatch(/^\$198\.41 refunded to the card \(re_/);
+    expect(await invoice()).toEqual({ status: 'paid', paid_cents: 19_841 });
+    const refunds = await db.selectFrom('payments').select(['amount_cents', 'method']).where('invoice_id', '=', inv.id).where('kind', '=', 'refund').execute();
+    expect(refunds).toEqual([{ amount_cents: 19_841, method: 'card' }]);
+    const pi = (await stripeClient().checkout.sessions.retrieve(url.split('/pay/')[1]!)).payment_intent as string;
+    const charge = (await stripeClient().paymentIntents.retrieve(pi)).latest_charge as string;
+    expect((await stripeClient().charges.retrieve(charge)).amount_refunded).toBe(19_841);
+  });
+
+  it('refunds money paid in another currency, held as an exception, without touching the invoice', async () => {
+    const owner = await sessionUser(OWNER);
+    const o = await makeOrder({ customer: 'NGF' });
+    const inv = await issueInvoice(owner.id, { customerId: await customerId('NGF'), orderIds: [o.id], extras: [] });
+    const metadata = { invoice_id: inv.id };
+    const session = await stripeClient().checkout.sessions.create({
+      mode: 'payment',
+      line_items: [{ quantity: 1, price_data: { currency: 'eur', unit_amount: 12_345, product_data: { name: 'Wrong currency' } } }],
+      metadata,
+      payment_intent_data: { metadata },
+      success_url: 'http://127.0.0.1:3100/portal',
+      cancel_url: 'http://127.0.0.1:3100/portal',
+    });
+    expect((await submitCard(session.url!, '4242424242424242')).status).toBe(303);
+    const ex = await db.selectFrom('payment_exceptions').selectAll().where('invoice_id', '=', inv.id).executeTakeFirstOrThrow();
+    expect([ex.reason, ex.amount_cents, ex.currency, ex.payment_id]).toEqual(['wrong_currency', 12_345, 'eur', null]);
+
+    const done = await resolvePaymentException(owner.id, { exceptionId: ex.id, action: 'refund', note: 'paid in euros by mistake' });
+    expect(done.message).toMatch(/^Refunded through Stripe \(re_\w+\): paid in euros by mistake$/);
+    const after = await db.selectFrom('payment_exceptions').select(['status', 'resolved_by']).where('id', '=', ex.id).executeTakeFirstOrThrow();
+    expect(after).toEqual({ status: 'resolved', resolved_by: owner.id });
+    // The refund's own event changes no invoice.
+    expect(await db.selectFrom('payments').select('id').where('invoice_id', '=', inv.id).execute()).toEqual([]);
+    expect((await db.selectFrom('invoices').select('status').where('id', '=', inv.id).executeTakeFirstOrThrow()).status).toBe('issued');
+    await expect(resolvePaymentException(owner.id, { exceptionId: ex.id, action: 'refund', note: '' })).rejects.toThrow('already resolved');
   });
 
   it('reports an unreachable payment service as such, with nothing charged', async () => {

@@ -166,7 +166,7 @@ describe('after issue: credit notes and payments', () => {
     let d = (await getInvoiceDetail('staff', inv.id))!;
     expect([d.invoice.status, d.summary.openCents]).toEqual(['partly_paid', 56_000]);
     expect(await failure(recordManualPayment(owner.id, { invoiceId: inv.id, amount: 56_001, method: 'check', reference: '', receivedOn: today }))).toBe(
-      'BAD_INPUT: The open balance is $560.00; record at most that.',
+      'BAD_INPUT: That is $0.01 more than the open balance of $560.00. Tick "Keep the excess as credit on account" to record it all.',
     );
     await recordManualPayment(owner.id, { invoiceId: inv.id, amount: 56_000, method: 'bank_transfer', reference: 'TRX-88', receivedOn: today });
     d = (await getInvoiceDetail('staff', inv.id))!;

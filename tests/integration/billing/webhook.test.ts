@@ -137,9 +137,13 @@ describe('payment events', () => {
     expect(await state(id)).toEqual({ status: 'partly_paid', paid: 12_841, payments: ['payment:19841', 'refund:5000', 'refund:2000'] });
   });
 
-  it('answers 200 to events it does not use, and to events for unknown invoices, changing nothing', async () => {
+  it('answers 200 to events it does not use, and holds money for unknown invoices as a payment exception', async () => {
     expect((await deliver(event('customer.created', { id: rid('cus'), object: 'customer' }))).body.outcome).toBe('ignored: event type customer.created is not used');
-    const ghost = await deliver(event('payment_intent.succeeded', intent(rid('pi'), 100, '00000000-0000-4000-8000-000000000000')));
-    expect(ghost.body.outcome).toMatch(/^ignored: no invoice/);
+    const pi = rid('pi');
+    const ghost = await deliver(event('payment_intent.succeeded', intent(pi, 100, '00000000-0000-4000-8000-000000000000')));
+    expect(ghost.status).toBe(200);
+    expect(ghost.body.outcome).toMatch(/^exception: \$1\.00 arrived .* which does not exist\.$/);
+    const held = await db.selectFrom('payment_exceptions').select(['reason', 'amount_cents', 'payment_id']).where('stripe_payment_intent_id', '=', pi).execute();
+    expect(held).toEqual([{ reason: 'unknown_invoice', amount_cents: 100, payment_id: null }]);
   });
 });

@@ -94,7 +94,7 @@ describe('open balance and status', () => {
     [0, 0, 'issued', 10_000],
     [4_000, 0, 'partly_paid', 6_000],
     [10_000, 0, 'paid', 0],
-    [12_000, 0, 'paid', -2_000], // overpaid: a credit balance of 20.00
+    [12_000, 0, 'overpaid', -2_000], // 20.00 more than asked: the customer's credit on account
     [0, 10_000, 'credited', 0],
     [7_000, 3_000, 'paid', 0],
     [0, 3_000, 'issued', 7_000],

@@ -13,12 +13,24 @@ export default async function PortalInvoicesPage() {
   const user = await requirePageUser('portal.use', '/portal/invoices');
   const invoices = await findPortalInvoices(user);
   const open = invoices.reduce((s, i) => s + Math.max(0, i.openCents), 0);
+  const credit = invoices.reduce((s, i) => s + i.excessCents, 0);
   return (
     <div className="flex flex-col gap-6">
       <PageHeader
         title="Invoices"
         description="Your company's invoices: open ones can be paid online by card. Each invoice has its PDF and payment history."
-        meta={invoices.length ? <span className="text-sm text-ink-muted">Open: <Money cents={open} /></span> : null}
+        meta={
+          invoices.length ? (
+            <span className="text-sm text-ink-muted">
+              Open: <Money cents={open} />
+              {credit > 0 ? (
+                <>
+                  {' '}· Credit on account: <Money cents={credit} />
+                </>
+              ) : null}
+            </span>
+          ) : null
+        }
       />
       {invoices.length === 0 ? (
         <EmptyState title="No invoices yet" description="Invoices appear here when we bill shipped orders." />

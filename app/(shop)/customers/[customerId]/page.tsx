@@ -8,7 +8,10 @@ import { EmptyState } from '@/components/ui/empty-state';
 import { PageHeader } from '@/components/ui/page-header';
 import { Table, TBody, Td, Th, THead, Tr } from '@/components/ui/table';
 import { can, requirePageUser } from '@/lib/auth/current-user';
+import { formatMoney } from '@/components/money';
+import { findInvoices } from '@/lib/billing/queries';
 import { findContacts, getCustomer } from '@/lib/customers/queries';
+import { InvoiceTable } from '../../invoices/_components/invoice-table';
 import { basisPointsToPercentText } from '@/lib/records/fields';
 import { PartGrid } from '../../parts/part-grid';
 import { updateCustomerAction } from '../actions';
@@ -16,6 +19,18 @@ import { CustomerForm } from '../customer-form';
 import { AddContactForm, ContactActions } from './contact-forms';
 
 export const metadata: Metadata = { title: 'Customer' };
+
+/** The customer's account with the shop: every invoice, what is owed and the credit on account. */
+async function Statement({ customerId }: { customerId: string }) {
+  const invoices = await findInvoices('staff', { customerId });
+  const owed = invoices.reduce((t, i) => t + Math.max(0, i.openCents), 0);
+  const credit = invoices.reduce((t, i) => t + i.excessCents, 0);
+  return (
+    <Card title="Statement" description={`Owed: ${formatMoney(owed)} · Credit on account: ${formatMoney(credit)}`} padding="none">
+      {invoices.length ? <InvoiceTable invoices={invoices} basePath="/invoices" audience="customer" /> : <p className="p-4 text-sm text-ink-muted">No invoices yet.</p>}
+    </Card>
+  );
+}
 
 export default async function CustomerPage({ params }: { params: Promise<{ customerId: string }> }) {
   const { customerId } = await params;
@@ -98,6 +113,7 @@ export default async function CustomerPage({ params }: { params: Promise<{ custo
       <Card title="Parts">
         <PartGrid customerId={customer.id} unitSystem={user.unitSystem} height={360} />
       </Card>
+      {can(user, 'invoices.read') ? <Statement customerId={customer.id} /> : null}
     </div>
   );
 }

@@ -8,10 +8,10 @@ import { FormMessage } from '@/components/ui/form-message';
 import { PageHeader } from '@/components/ui/page-header';
 import { can, requirePageUser } from '@/lib/auth/current-user';
 import { todayIso } from '@/lib/billing/dates';
-import { findReminders, getInvoiceDetail } from '@/lib/billing/queries';
+import { findInvoices, findReminders, getInvoiceDetail } from '@/lib/billing/queries';
 import { formatDateTime } from '@/lib/quotes/format';
 import { InvoiceFacts, InvoiceLines, InvoiceStatusBadge, LINK, PaymentHistory, RoundingNote } from '../_components/invoice-view';
-import { CreditNoteForm, ManualPaymentForm, ResendForm } from './office-forms';
+import { ApplyCreditForm, CreditNoteForm, ManualPaymentForm, RefundExcessForm, ResendForm } from './office-forms';
 
 export const metadata: Metadata = { title: 'Invoice' };
 
@@ -27,6 +27,12 @@ export default async function InvoicePage({ params, searchParams }: Props) {
   const reminders = await findReminders(invoice.id);
   const mayIssue = can(user, 'invoices.issue');
   const open = summary.openCents > 0;
+  const hasExcess = summary.excessCents > 0;
+  const targets = mayIssue && hasExcess
+    ? (await findInvoices('staff', { customerId: invoice.customer_id, status: 'open' }))
+        .filter((i) => i.id !== invoice.id && i.currency === invoice.currency)
+        .map((i) => ({ id: i.id, label: `${i.number}: ${formatMoney(i.openCents)} open` }))
+    : [];
   return (
     <div className="flex flex-col gap-6">
       <PageHeader
@@ -73,14 +79,26 @@ export default async function InvoicePage({ params, searchParams }: Props) {
       <Card title="Payments and credit notes">
         <PaymentHistory detail={detail} />
       </Card>
-      {mayIssue && open ? (
+      {mayIssue && hasExcess ? (
+        <div className="grid gap-4 md:grid-cols-2">
+          <Card title={`Credit on account: ${formatMoney(summary.excessCents)}`} description="Paid beyond this invoice. Give it back to the customer, or apply it to another of their open invoices.">
+            <RefundExcessForm invoiceId={invoice.id} maxText={formatMoney(summary.excessCents)} hasCard={detail.payments.some((p) => p.kind === 'payment' && p.method === 'card')} />
+          </Card>
+          <Card title="Apply the credit to another invoice">
+            <ApplyCreditForm fromInvoiceId={invoice.id} targets={targets} />
+          </Card>
+        </div>
+      ) : null}
+      {mayIssue ? (
         <div className="grid gap-4 md:grid-cols-2">
           <Card title="Record a payment" description="A check or bank transfer received. Card payments online are recorded automatically.">
             <ManualPaymentForm invoiceId={invoice.id} today={todayIso()} />
           </Card>
-          <Card title="Credit note" description="Corrects the invoice by reducing what is owed. It gets its own number and is shown to the customer.">
-            <CreditNoteForm invoiceId={invoice.id} maxText={formatMoney(summary.openCents)} />
-          </Card>
+          {open ? (
+            <Card title="Credit note" description="Corrects the invoice by reducing what is owed. It gets its own number and is shown to the customer.">
+              <CreditNoteForm invoiceId={invoice.id} maxText={formatMoney(summary.openCents)} />
+            </Card>
+          ) : null}
         </div>
       ) : null}
       <RoundingNote rule={invoice.rounding_rule} />

@@ -8,6 +8,7 @@ export function BillingTabs({ canIssue }: { canIssue: boolean }) {
         { href: '/invoices', label: 'Invoices' },
         ...(canIssue ? [{ href: '/invoices/new', label: 'New invoice' }] : []),
         { href: '/invoices/receivables', label: 'Receivables' },
+        { href: '/invoices/exceptions', label: 'Payment exceptions' },
       ]}
     />
   );

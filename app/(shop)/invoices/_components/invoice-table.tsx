@@ -1,5 +1,6 @@
 import Link from 'next/link';
 import { Money } from '@/components/money';
+import { OpenBalance } from '@/components/open-balance';
 import { Table, TBody, Td, Th, THead, Tr } from '@/components/ui/table';
 import type { InvoiceSummary } from '@/lib/billing/queries';
 import { formatDay } from '@/lib/quotes/format';
@@ -39,8 +40,7 @@ export function InvoiceTable({ invoices, basePath, audience }: { invoices: Invoi
               <Money cents={i.totalCents} />
             </Td>
             <Td numeric>
-              {/* Staff see a credit balance in brackets; the customer sees what is still to pay. */}
-              {audience === 'staff' ? <Money cents={i.openCents} accounting /> : <Money cents={Math.max(0, i.openCents)} />}
+              <OpenBalance openCents={i.openCents} currency={i.currency} />
             </Td>
             <Td>
               <a className={LINK} href={`${basePath}/${i.id}/pdf`} aria-label={`PDF of invoice ${i.number}`}>

@@ -12,7 +12,7 @@ import { formatDateTime, formatDay, formatUnitPrice } from '@/lib/quotes/format'
 export const LINK = 'font-medium text-action hover:underline';
 
 export function InvoiceStatusBadge({ summary }: { summary: Pick<InvoiceSummary, 'status' | 'isOverdue'> }) {
-  const tone = summary.status === 'paid' ? 'neutral' : summary.status === 'credited' ? 'outline' : 'action';
+  const tone = summary.status === 'paid' ? 'neutral' : summary.status === 'credited' ? 'outline' : summary.status === 'overpaid' ? 'copper' : 'action';
   return (
     <span className="inline-flex flex-wrap gap-1">
       <Badge tone={tone}>{STATUS_WORDS[summary.status]}</Badge>
@@ -45,7 +45,7 @@ export function InvoiceLines({ detail }: { detail: InvoiceDetail }) {
           <TotalRow label="Total" cents={invoice.total_cents} />
           {summary.creditedCents > 0 ? <TotalRow label="Credited" cents={-summary.creditedCents} /> : null}
           {summary.paidCents > 0 ? <TotalRow label="Paid" cents={-summary.paidCents} /> : null}
-          <TotalRow label={summary.openCents < 0 ? 'Credit balance' : 'Balance due'} cents={Math.abs(summary.openCents)} strong />
+          <TotalRow label={summary.excessCents > 0 ? 'Credit on account' : 'Balance due'} cents={summary.excessCents > 0 ? summary.excessCents : summary.openCents} strong />
         </>
       }
     />
@@ -77,6 +77,16 @@ export function PaymentHistory({ detail }: { detail: InvoiceDetail }) {
       cents: p.kind === 'refund' ? p.amount_cents : -p.amount_cents,
     })),
     ...detail.creditNotes.map((c) => ({ key: c.id, at: c.created_at, what: `Credit note ${c.number}`, note: c.reason, cents: -c.amount_cents })),
+    ...detail.creditMoves.map((m) => {
+      const out = m.from_invoice_id === detail.invoice.id;
+      return {
+        key: m.id,
+        at: m.created_at,
+        what: out ? `Credit applied to invoice ${m.to_number}` : `Credit from invoice ${m.from_number}`,
+        note: m.note,
+        cents: out ? m.amount_cents : -m.amount_cents,
+      };
+    }),
     ...detail.declines.map((d) => ({ key: d.id, at: d.received_at, what: 'Card payment not completed', note: d.outcome.replace(/^declined: /, ''), cents: null })),
   ].sort((a, b) => a.at.getTime() - b.at.getTime());
   return (
@@ -111,8 +121,11 @@ export function InvoiceFacts({ detail }: { detail: InvoiceDetail }) {
       <dd>{invoice.payment_terms_days === 0 ? 'Due on receipt' : `Net ${invoice.payment_terms_days} days`}</dd>
       <dt className="text-ink-muted">Due date</dt>
       <dd>{formatDay(summary.dueOn)}</dd>
-      <dt className="text-ink-muted">Balance due</dt>
-      <dd className="font-semibold">{formatMoney(Math.max(0, summary.openCents))}</dd>
+      <dt className="text-ink-muted">{summary.excessCents > 0 ? 'Credit on account' : 'Balance due'}</dt>
+      <dd className="font-semibold">
+        {formatMoney(summary.excessCents > 0 ? summary.excessCents : summary.openCents)}
+        {summary.excessCents > 0 ? <span className="block text-xs font-normal text-ink-muted">Paid {formatMoney(summary.excessCents)} more than the invoice asked.</span> : null}
+      </dd>
     </dl>
   );
 }

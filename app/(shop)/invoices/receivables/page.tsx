@@ -1,6 +1,6 @@
 import type { Metadata } from 'next';
 import Link from 'next/link';
-import { Money } from '@/components/money';
+import { formatMoney, Money } from '@/components/money';
 import { Card } from '@/components/ui/card';
 import { EmptyState } from '@/components/ui/empty-state';
 import { PageHeader } from '@/components/ui/page-header';
@@ -33,9 +33,33 @@ export default async function ReceivablesPage() {
     <div className="flex flex-col gap-4">
       <PageHeader
         title="Receivables"
-        description={`What customers owe as of ${formatDay(report.asOf)}, by days past the due date. Paid and credited invoices are left out.`}
+        description={`What customers owe as of ${formatDay(report.asOf)}, by days past the due date. Paid and credited invoices are left out; overpayments show as credit on account.`}
       />
       <BillingTabs canIssue={can(user, 'invoices.issue')} />
+      {report.credits.length ? (
+        <Card title={`Credit on account: ${formatMoney(report.creditCents)}`} description="Paid beyond what was invoiced, and not yet refunded or applied. Not part of what is owed below." padding="none">
+          <Table caption="Credit on account by customer" captionHidden dense>
+            <THead>
+              <tr>
+                <Th>Customer</Th>
+                <Th numeric>Credit on account</Th>
+              </tr>
+            </THead>
+            <TBody>
+              {report.credits.map((c) => (
+                <Tr key={c.customerId}>
+                  <Td>
+                    <Link href="/invoices?show=overpaid" className={LINK}>{c.customerName}</Link>
+                  </Td>
+                  <Td numeric>
+                    <Money cents={c.creditCents} />
+                  </Td>
+                </Tr>
+              ))}
+            </TBody>
+          </Table>
+        </Card>
+      ) : null}
       {report.invoices.length === 0 ? (
         <EmptyState title="Nothing is owed" description="Every issued invoice is paid or credited." />
       ) : (

@@ -57,7 +57,7 @@ export default async function PortalInvoicePage({ params, searchParams }: Props)
         <Card title="Details">
           <InvoiceFacts detail={detail} />
         </Card>
-        <Card title={summary.openCents > 0 ? 'Pay online' : 'Nothing to pay'}>
+        <Card title={summary.openCents > 0 ? 'Pay online' : summary.excessCents > 0 ? 'Credit on account' : 'Nothing to pay'}>
           {summary.openCents > 0 ? (
             <div className="flex flex-col gap-3 text-sm">
               <p>
@@ -66,6 +66,11 @@ export default async function PortalInvoicePage({ params, searchParams }: Props)
               </p>
               <PayForm invoiceId={invoice.id} label={`Pay ${formatMoney(summary.openCents)}`} />
             </div>
+          ) : summary.excessCents > 0 ? (
+            <p className="text-sm">
+              You paid <strong>{formatMoney(summary.excessCents)}</strong> more than this invoice asked. It is your credit on account: we will refund it or
+              apply it to another invoice, and tell you which.
+            </p>
           ) : (
             <p className="text-sm">This invoice is settled. Thank you.</p>
           )}
