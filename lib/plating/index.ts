@@ -106,3 +106,31 @@ export {
   type GalvanicMaterial,
   type ServiceEnvironment,
 } from './galvanic-data';
+export { ANODIZE_720_CONSTANT, anodizeCalc, anodizeThicknessFromTime, anodizeDimensionChange, requireGrowthFraction, type AnodizeInput, type AnodizeResult } from './anodize';
+export {
+  EN_DENSITY_BY_PHOSPHORUS,
+  densityForPhosphorus,
+  electrolessCalc,
+  metalTurnoversFromReplenishment,
+  type ElectrolessInput,
+  type ElectrolessResult,
+} from './electroless';
+export {
+  CORROSIVITY_CATEGORIES,
+  ZINC_LOSS_UM_PER_YEAR,
+  ZINC_LIFE_STANDARD,
+  describeZincLife,
+  isCorrosivityCategory,
+  zincServiceLife,
+  zincThicknessForLife,
+  type CorrosivityCategory,
+  type ZincLife,
+} from './zinc-life';
+export {
+  DEFAULT_PASSIVATION_WINDOWS,
+  checkPassivation,
+  type PassivationLot,
+  type PassivationVerdict,
+  type PassivationWindow,
+  type TemperatureBand,
+} from './passivation';

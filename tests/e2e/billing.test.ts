@@ -158,4 +158,72 @@ describe('billing', () => {
       await page.context().close();
     }
   });
+
+  it('[owner] records a check above the balance only after confirming it, sees the credit on account and applies it to another open invoice', async () => {
+    const ngf = await customerId('NGF');
+    const a = await makeOrder({ customer: 'NGF', quantity: 100, unitPriceCents: 100 });
+    const b = await makeOrder({ customer: 'NGF', quantity: 100, unitPriceCents: 100 });
+    const { issueInvoice } = await import('@/lib/billing/mutations');
+    const ownerId = (await db.selectFrom('users').select('id').where('email', '=', 'owner@kestrel-plating.test').executeTakeFirstOrThrow()).id;
+    // 100 × 100 ¢ = 10 000 ¢ + 7.25 % (725 ¢) = 10 725 ¢ each
+    const first = await issueInvoice(ownerId, { customerId: ngf, orderIds: [a.id], extras: [] });
+    const second = await issueInvoice(ownerId, { customerId: ngf, orderIds: [b.id], extras: [] });
+    const page = await newPage();
+    try {
+      await signInAs(page, 'owner@kestrel-plating.test', DEMO_PASSWORD);
+      await page.goto(`${APP_URL}/invoices/${first.id}`);
+      const payment = page.locator('form').filter({ has: page.getByRole('button', { name: 'Record payment' }) });
+      await payment.getByLabel('Amount ($)').fill('150.00');
+      await payment.getByLabel('Reference').fill('Check 4410');
+      await payment.getByRole('button', { name: 'Record payment' }).click();
+      await page.getByText('That is $42.75 more than the open balance of $107.25.').waitFor();
+      expect(await db.selectFrom('payments').select('id').where('invoice_id', '=', first.id).execute()).toEqual([]);
+      await screenshot(page, 'billing-owner-check-above-balance');
+      await payment.getByLabel(/Keep the excess as credit on account/).check();
+      await payment.getByRole('button', { name: 'Record payment' }).click();
+      await page.getByText('Payment recorded; anything above the balance is credit on account.').waitFor();
+      await page.reload();
+      await page.getByText('Overpaid', { exact: true }).first().waitFor();
+      await page.getByRole('heading', { name: 'Credit on account: $42.75' }).waitFor();
+      await screenshot(page, 'billing-owner-overpaid-invoice');
+
+      const apply = page.locator('form').filter({ has: page.getByRole('button', { name: 'Apply credit' }) });
+      await apply.getByLabel('Invoice').selectOption(second.id);
+      await apply.getByLabel('Amount ($)').fill('42.75');
+      await apply.getByRole('button', { name: 'Apply credit' }).click();
+      await page.getByText('Credit applied.').waitFor();
+      await page.goto(`${APP_URL}/invoices/${second.id}`);
+      await page.getByText(`Credit from invoice ${first.number}`).waitFor();
+      await page.getByText('Partly paid', { exact: true }).first().waitFor();
+      await screenshot(page, 'billing-owner-credit-applied');
+      const rows = await db.selectFrom('invoices').select(['id', 'status', 'paid_cents']).where('id', 'in', [first.id, second.id]).execute();
+      expect(Object.fromEntries(rows.map((r) => [r.id === first.id ? 'first' : 'second', [r.status, r.paid_cents]]))).toEqual({ first: ['paid', 10_725], second: ['partly_paid', 4_275] });
+    } finally {
+      await page.context().close();
+    }
+  });
+
+  it('[owner] sees a payment that fits no invoice on the home screen and in the payment exceptions list, with what Stripe sent', async () => {
+    const { processStripeEvent } = await import('@/lib/billing/webhook');
+    const pi = `pi_e2e_${Date.now()}`;
+    await processStripeEvent({
+      id: `evt_e2e_${Date.now()}`, object: 'event', type: 'payment_intent.succeeded', created: Math.floor(Date.now() / 1000),
+      data: { object: { id: pi, object: 'payment_intent', amount: 4321, amount_received: 4321, currency: 'usd', metadata: {}, latest_charge: null } },
+    } as never);
+    const page = await newPage();
+    try {
+      await signInAs(page, 'owner@kestrel-plating.test', DEMO_PASSWORD);
+      await page.goto(`${APP_URL}/home`);
+      await page.getByRole('region', { name: 'Money to check' }).getByText(/payment exceptions? to review/).waitFor();
+      await screenshot(page, 'billing-owner-home-exceptions');
+      await page.goto(`${APP_URL}/invoices/exceptions`);
+      const card = page.locator('section, div').filter({ hasText: pi }).last();
+      await page.getByRole('heading', { name: 'No such invoice: $43.21' }).first().waitFor();
+      await card.getByText('What the payment service sent').first().click();
+      await page.getByText(`"amount_received": 4321`).first().waitFor();
+      await screenshot(page, 'billing-owner-exceptions');
+    } finally {
+      await page.context().close();
+    }
+  });
 });
