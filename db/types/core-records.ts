@@ -1,6 +1,6 @@
 // Tables of migration 2026_12_01_2210_create_core_records.
 import type { Generated, Selectable } from 'kysely';
-import type { Json, Numeric, NumericNullable, DateColumn, Timestamp, GeneratedTimestamp } from './columns';
+import type { Json, Numeric, NumericNullable, DateColumn, Timestamp, GeneratedTimestamp, TimestampNullable } from './columns';
 
 export type FilesTable = {
   id: Generated<string>;
@@ -49,6 +49,9 @@ export type TanksTable = {
   temp_max_c: NumericNullable;
   is_active: Generated<boolean>;
   created_at: GeneratedTimestamp;
+  /** What the tank's process family needs to run it (lib/families/*): see each family's tank settings. */
+  family_settings: Json<Record<string, unknown>>;
+  made_up_at: TimestampNullable;
 };
 
 export type CalculationsTable = {
@@ -77,6 +80,8 @@ export type PartsTable = {
   stl_file_id: string | null;
   created_at: GeneratedTimestamp;
   updated_at: GeneratedTimestamp;
+  corrosivity_category: 'C1' | 'C2' | 'C3' | 'C4' | 'C5' | 'CX' | null;
+  design_life_years: NumericNullable;
 };
 
 export type ProcessStep = { step: string; note?: string };
@@ -92,8 +97,10 @@ export type FinishesTable = {
   min_thickness_um: Numeric;
   max_thickness_um: NumericNullable;
   method: 'rack' | 'barrel';
-  current_density_adm2: Numeric;
-  efficiency: Numeric;
+  /** Electroplating and anodizing only; null for families that run without current. */
+  current_density_adm2: NumericNullable;
+  /** Electroplating only (cathode current efficiency). */
+  efficiency: NumericNullable;
   distribution_ratio: Numeric;
   tank_volts: Numeric;
   parts_per_load: number;
@@ -107,7 +114,11 @@ export type FinishesTable = {
   line_id: string | null;
   is_active: Generated<boolean>;
   created_at: GeneratedTimestamp;
+  family: Generated<ProcessFamilyId>;
+  family_params: Json<Record<string, unknown>>;
 };
+
+export type ProcessFamilyId = 'electroplating' | 'electroless_nickel' | 'anodizing' | 'passivation';
 
 export type RateSetsTable = {
   id: Generated<string>;

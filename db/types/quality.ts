@@ -111,7 +111,27 @@ export type CertificatesTable = {
   signed_at: Timestamp;
 };
 
+// Migration 2026_12_03_1000_add_process_families: the families' own lot records.
+export type ProcessRecordKind = 'seal_test' | 'phosphorus_content' | 'passivation_lot' | 'passivation_test' | 'salt_spray';
+
+export type ProcessRecordsTable = {
+  id: Generated<string>;
+  work_order_id: string;
+  kind: ProcessRecordKind;
+  method: string;
+  values: Json<Record<string, number | string>>;
+  verdict: 'pass' | 'fail';
+  reasons: Json<string[]>;
+  notes: Generated<string>;
+  recorded_by: string | null;
+  recorded_at: Timestamp;
+  voided_at: TimestampNullable;
+  voided_by: string | null;
+  void_reason: string | null;
+};
+
 export type QualityTables = {
+  process_records: ProcessRecordsTable;
   sampling_plans: SamplingPlansTable;
   sampling_plan_rows: SamplingPlanRowsTable;
   thickness_readings: ThicknessReadingsTable;
@@ -125,3 +145,4 @@ export type ThicknessReading = Selectable<ThicknessReadingsTable>;
 export type BakeRecord = Selectable<BakeRecordsTable>;
 export type Nonconformance = Selectable<NonconformancesTable>;
 export type Certificate = Selectable<CertificatesTable>;
+export type ProcessRecord = Selectable<ProcessRecordsTable>;

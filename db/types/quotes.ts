@@ -97,7 +97,10 @@ export type PlatingRunsTable = {
   current_a: NumericNullable;
   meter_start_ah: NumericNullable;
   meter_stop_ah: NumericNullable;
-  amp_hours: Numeric;
+  /** Null for a run without current (electroless nickel, passivation). */
+  amp_hours: NumericNullable;
+  /** Bath conditions of a run without current, e.g. temperature and concentration. */
+  conditions: Json<Record<string, number>>;
   loads: number;
   parts_per_load: number;
   predicted_thickness_um: Numeric;

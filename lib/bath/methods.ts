@@ -2,6 +2,7 @@
 // per-mL factors printed in comments are what ./titration.ts derives from the formula and
 // IUPAC atomic weights, and tests/unit/bath/methods.test.ts checks them against the sources.
 import type { DerivedMethod, DirectMethod, TitrationMethod } from './titration';
+import { FAMILIES } from '@/lib/families';
 import { INSTRUMENT_METHODS } from './methods-instrumental';
 
 type TitrationSeed = Omit<TitrationMethod, 'kind' | 'blankMl' | 'unit'> & { blankMl?: number; unit?: TitrationMethod['unit'] };
@@ -293,6 +294,7 @@ export const TITRATION_METHODS: readonly TitrationMethod[] = [
 export const SEEDED_METHODS: readonly (TitrationMethod | DirectMethod | DerivedMethod)[] = [
   ...TITRATION_METHODS,
   ...INSTRUMENT_METHODS,
+  ...FAMILIES.flatMap((f) => f.methods),
 ];
 
 export function getMethod(id: string): TitrationMethod | DirectMethod | DerivedMethod | null {

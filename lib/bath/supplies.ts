@@ -5,6 +5,7 @@
 // which salt a shop prefers is common practice, and the supplier's data sheet governs.
 import type { Supply } from './additions';
 import { getSalt } from '../chemistry/salts';
+import { EN_SUPPLIES } from '../families/electroless-nickel/bath';
 
 export type AnalyteSupply = Supply | { kind: 'additive'; name: string };
 
@@ -53,6 +54,9 @@ export const TEMPLATE_SUPPLIES: Readonly<Record<string, Readonly<Record<string, 
     sodiumHydroxide: itself('Sodium hydroxide'),
     brightener: additive('Zinc–nickel brightener'),
   },
+  'trivalent-passivate': {
+    chromium: itself('Trivalent passivate concentrate'),
+  },
   'acid-tin': {
     tin: salt('stannous-sulfate'),
     sulfuricAcid: concentrate('sulfuric-acid-66-baume'),
@@ -77,6 +81,8 @@ export const TEMPLATE_SUPPLIES: Readonly<Record<string, Readonly<Record<string, 
   'hydrochloric-acid-dip': {
     hydrochloricAcid: concentrate('hydrochloric-acid-20-baume'),
   },
+  // The other process families' baths bring their supplies along.
+  ...EN_SUPPLIES,
 };
 
 export function supplyFor(templateId: string, analyteKey: string): AnalyteSupply | null {

@@ -243,4 +243,20 @@ export const ZINC_TIN_TEMPLATES: readonly BathTemplate[] = [
     note: TEMPLATE_NOTE,
     basis: 'From memory (reference §2–3 marks these values unverified)',
   },
+  {
+    // A chromium(III) conversion coating after zinc plating: no current, a dip of seconds.
+    id: 'trivalent-passivate',
+    name: 'Trivalent chromium passivate (clear, after zinc)',
+    deposit: null,
+    efficiencyPercent: null,
+    currentDensityAdm2: null,
+    analytes: [
+      { key: 'chromium', name: 'Chromium (III)', unit: 'g/L', methodId: 'instrumental-metal', target: 3, lowerControl: 2, upperControl: 4, frequencyHours: DAILY_H, basis: 'From memory; supplier data sheet governs' },
+      { key: 'ph', name: 'pH', unit: 'pH', methodId: 'ph-meter', target: 2, lowerControl: 1.7, upperControl: 2.3, frequencyHours: DAILY_H / 3, basis: 'From memory; supplier data sheet governs' },
+      temperature(25, 20, 30, 'From memory'),
+    ],
+    hazards: ['strong_acid', 'oxidiser'],
+    note: TEMPLATE_NOTE,
+    basis: 'From memory; supplier data sheet governs',
+  },
 ];

@@ -1,18 +1,13 @@
 // Bath chemistry templates: the starting point a shop copies for a new tank. Values are typical
 // (reference §2–3 with their sources, or marked "from memory"); the supplier's data sheet governs.
 import { TEMPLATE_NOTE, type BathTemplate } from './template-types';
+import { FAMILIES } from '@/lib/families';
 import { getMethod } from './methods';
-import { NICKEL_COPPER_TEMPLATES } from './templates-nickel-copper';
-import { ZINC_TIN_TEMPLATES } from './templates-zinc-tin';
-import { OTHER_TEMPLATES } from './templates-other';
 
 export * from './template-types';
 
-export const BATH_TEMPLATES: readonly BathTemplate[] = [
-  ...NICKEL_COPPER_TEMPLATES,
-  ...ZINC_TIN_TEMPLATES,
-  ...OTHER_TEMPLATES,
-];
+/** Every family's templates (lib/families registers them). */
+export const BATH_TEMPLATES: readonly BathTemplate[] = FAMILIES.flatMap((f) => f.templates);
 
 export function getTemplate(id: string): BathTemplate | null {
   return BATH_TEMPLATES.find((t) => t.id === id) ?? null;

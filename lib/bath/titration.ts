@@ -32,6 +32,11 @@ export type TitrationMethod = {
   blankMl: number;
   /** `reported` mol of the reported species react with `titrant` mol (or eq) of titrant. */
   stoichiometry: { reported: number; titrant: number };
+  /**
+   * A back-titration: a measured excess of reagent is added and what is left is titrated, so the
+   * analyte is what the sample took away, (blank − burette) mL. The blank is then required.
+   */
+  back?: boolean;
   /** A printed shop factor in g per mol (or eq) of titrant; when absent it comes from the formula. */
   gramsPerTitrantUnit?: number;
   indicator: string;
@@ -206,16 +211,20 @@ function computeTitration(method: TitrationMethod, inputs: AnalysisInputs): Extr
     optionalNumber(inputs.titrantConcentration, 'titrantConcentration', 'Titrant concentration', { positive: true }) ??
     method.titrant.concentration;
   const f = optionalNumber(inputs.titrantFactor, 'titrantFactor', 'Titrant factor', { min: 0.5, max: 1.5 }) ?? 1;
-  if (burette < blank) {
+  if (method.back) {
+    if (!(blank > 0)) throw badInput('blankMl', 'Enter the blank titration: this method titrates what the sample left over.');
+    if (burette > blank) throw badInput('buretteMl', `The burette reading (${burette} mL) is above the blank (${blank} mL): repeat the titration.`);
+  } else if (burette < blank) {
     throw badInput('buretteMl', `The burette reading (${burette} mL) is below the blank (${blank} mL): repeat the titration.`);
   }
-  const gramsPerLitre = ((burette - blank) * conc * f * gramsPerTitrantUnit(method)) / effectiveSampleMl(method);
+  const [first, second] = method.back ? [blank, burette] : [burette, blank];
+  const gramsPerLitre = ((first - second) * conc * f * gramsPerTitrantUnit(method)) / effectiveSampleMl(method);
   const value = finiteResult(toUnit(gramsPerLitre, method.unit), method.name);
   return {
     ok: true,
     value,
     unit: method.unit,
-    detail: `(${burette} − ${blank}) mL × ${conc} ${method.titrant.concentrationUnit} × ${f} × ${gramsPerTitrantUnit(method).toFixed(3)} g ÷ ${effectiveSampleMl(method)} mL`,
+    detail: `(${first} − ${second}) mL × ${conc} ${method.titrant.concentrationUnit} × ${f} × ${gramsPerTitrantUnit(method).toFixed(3)} g ÷ ${effectiveSampleMl(method)} mL`,
   };
 }
 

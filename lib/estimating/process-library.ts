@@ -7,10 +7,10 @@ import {
   bathMetalGPerL,
   DEFAULT_DRAG_OUT_L_PER_M2,
   DEFAULT_RECTIFIER_EFFICIENCY,
-  finishProcess,
   processForFinish,
   type TankFacts,
 } from '@/lib/quotes/process';
+import { finishProcess } from '@/lib/quotes/pricing';
 
 // Common practice: the finishes table's own default tank voltage.
 export const DEFAULT_TANK_VOLTS = 6;

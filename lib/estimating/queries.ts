@@ -8,7 +8,10 @@ import { libraryProcessFrom, type LibraryProcess } from './process-library';
 
 type Db = Kysely<Database>;
 
-/** Every active finish as a workbench process, completed from the tank that would run it. */
+/**
+ * Every active electroplated finish as a workbench process, completed from the tank that would run
+ * it. The other families' finishes have their own calculators (lib/families) beside it.
+ */
 export async function findProcessLibrary(conn: Db = defaultDb): Promise<LibraryProcess[]> {
   const [finishes, tanks] = await Promise.all([
     conn
@@ -18,6 +21,7 @@ export async function findProcessLibrary(conn: Db = defaultDb): Promise<LibraryP
         'efficiency', 'distribution_ratio', 'tank_volts', 'parts_per_load', 'line_id',
       ])
       .where('is_active', '=', true)
+      .where('family', '=', 'electroplating')
       .orderBy('code')
       .execute(),
     activeTankFacts(conn),
@@ -33,8 +37,9 @@ export async function findProcessLibrary(conn: Db = defaultDb): Promise<LibraryP
         ionCharge: f.ion_charge,
         minThicknessUm: f.min_thickness_um,
         method: f.method,
-        currentDensityAdm2: f.current_density_adm2,
-        efficiency: f.efficiency,
+        // Electroplated finishes always carry both (finishes_family_current / _efficiency checks).
+        currentDensityAdm2: f.current_density_adm2 ?? 0,
+        efficiency: f.efficiency ?? 0,
         distributionRatio: f.distribution_ratio,
         tankVolts: f.tank_volts,
         partsPerLoad: f.parts_per_load,

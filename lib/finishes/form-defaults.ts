@@ -1,6 +1,8 @@
 // The finish form's starting values, shown in the user's units. Pure.
 import { centsToDollarText, plainNumber } from '@/lib/records/fields';
 import { DISTRIBUTION_RATIO_DEFAULTS, displayUnit, fromStorage, type UnitSystem } from '@/lib/plating';
+import type { ProcessFamilyId } from '@/db/types';
+import { FAMILIES } from '@/lib/families';
 import { routeToText, type RouteStep } from './hazards';
 
 type Saved = {
@@ -14,8 +16,8 @@ type Saved = {
   min_thickness_um: number;
   max_thickness_um: number | null;
   method: 'rack' | 'barrel';
-  current_density_adm2: number;
-  efficiency: number;
+  current_density_adm2: number | null;
+  efficiency: number | null;
   distribution_ratio: number;
   tank_volts: number;
   parts_per_load: number;
@@ -28,7 +30,27 @@ type Saved = {
   bake_hours: number | null;
   line_id: string | null;
   is_active: boolean;
+  family: ProcessFamilyId;
+  family_params: Record<string, unknown>;
 };
+
+/** Each family's own fields as fp_<name>, in the user's units (thickness per hour, temperature). */
+function familyFieldDefaults(family: ProcessFamilyId, params: Record<string, unknown>, system: UnitSystem): Record<string, string> {
+  const out: Record<string, string> = {};
+  for (const fam of FAMILIES) {
+    const defaults = fam.defaultParams as Record<string, unknown>;
+    const values = fam.id === family ? { ...defaults, ...params } : defaults;
+    for (const f of fam.form) {
+      const raw = (values as Record<string, unknown>)[f.name];
+      const key = `fp_${f.name}`;
+      if (out[key] !== undefined && fam.id !== family) continue;
+      if (typeof raw === 'number') {
+        out[key] = plainNumber(f.convert === 'thicknessPerHour' ? fromStorage(raw, displayUnit('thickness', system)) : f.convert === 'temperature' ? fromStorage(raw, displayUnit('temperature', system)) : raw);
+      } else out[key] = typeof raw === 'string' ? raw : '';
+    }
+  }
+  return out;
+}
 
 
 export function finishFormDefaults(f: Saved | null, system: UnitSystem): Record<string, string> {
@@ -40,7 +62,8 @@ export function finishFormDefaults(f: Saved | null, system: UnitSystem): Record<
       finishId: '', code: '', name: '', specText: '', route: '', metal: 'Zn2+', minThickness: '', maxThickness: '', thicknessUnit,
       method: 'rack', currentDensity: '', currentDensityUnit: cdUnit, efficiencyPercent: '', distributionRatio: String(DISTRIBUTION_RATIO_DEFAULTS.rack),
       tankVolts: '6', partsPerLoad: '', handlingMinutesPerLoad: '10', maskingPerPiece: '0.00', bakeRequired: '', bakeThresholdHrc: '31',
-      bakeWindowHours: '4', bakeTemp: '', temperatureUnit: tempUnit, bakeHours: '', lineId: '', isActive: 'on',
+      bakeWindowHours: '4', bakeTemp: '', temperatureUnit: tempUnit, bakeHours: '', lineId: '', isActive: 'on', family: 'electroplating',
+      ...familyFieldDefaults('electroplating', {}, system),
     };
   }
   return {
@@ -54,9 +77,9 @@ export function finishFormDefaults(f: Saved | null, system: UnitSystem): Record<
     maxThickness: f.max_thickness_um === null ? '' : plainNumber(fromStorage(f.max_thickness_um, thicknessUnit)),
     thicknessUnit,
     method: f.method,
-    currentDensity: plainNumber(fromStorage(f.current_density_adm2, cdUnit)),
+    currentDensity: f.current_density_adm2 === null ? '' : plainNumber(fromStorage(f.current_density_adm2, cdUnit)),
     currentDensityUnit: cdUnit,
-    efficiencyPercent: plainNumber(f.efficiency * 100),
+    efficiencyPercent: f.efficiency === null ? '' : plainNumber(f.efficiency * 100),
     distributionRatio: plainNumber(f.distribution_ratio),
     tankVolts: plainNumber(f.tank_volts),
     partsPerLoad: String(f.parts_per_load),
@@ -70,5 +93,7 @@ export function finishFormDefaults(f: Saved | null, system: UnitSystem): Record<
     bakeHours: plainNumber(f.bake_hours),
     lineId: f.line_id ?? '',
     isActive: f.is_active ? 'on' : '',
+    family: f.family,
+    ...familyFieldDefaults(f.family, f.family_params, system),
   };
 }

@@ -4,6 +4,8 @@ import { z } from 'zod';
 import { dollarsSchema } from '@/lib/quotes/schemas';
 import { PLATING_METALS, toStorage, unitsOf, type UnitOf } from '@/lib/plating';
 import { checkbox, numberField, optionalNumberField, optionalText, requiredText } from '@/lib/records/fields';
+import type { ProcessFamilyId } from '@/db/types';
+import { FAMILY_IDS, getFamily } from '@/lib/families';
 import { routeFromText } from './hazards';
 
 const unitEnum = <Q extends 'thickness' | 'currentDensity' | 'temperature'>(q: Q, what: string) =>
@@ -11,8 +13,28 @@ const unitEnum = <Q extends 'thickness' | 'currentDensity' | 'temperature'>(q: Q
 
 const optionalUuid = z.preprocess((v) => (v === '' || v === undefined ? null : v), z.uuid({ error: 'Choose a line.' }).nullable());
 
+/** A family's own form fields (fp_<name>), converted to storage units and checked by its schema. */
+function familyParamsFrom(v: Record<string, unknown>, thicknessUnit: UnitOf<'thickness'>, temperatureUnit: UnitOf<'temperature'>) {
+  const family = getFamily(v.family as ProcessFamilyId);
+  const raw: Record<string, unknown> = {};
+  for (const f of family.form) {
+    const text = typeof v[`fp_${f.name}`] === 'string' ? (v[`fp_${f.name}`] as string).trim().replace(',', '.') : '';
+    if (text === '') {
+      if (!f.optional) raw[f.name] = undefined;
+      continue;
+    }
+    if (f.kind === 'select') raw[f.name] = text;
+    else {
+      const n = Number(text);
+      raw[f.name] = !Number.isFinite(n) ? text : f.convert === 'thicknessPerHour' ? toStorage(n, thicknessUnit) : f.convert === 'temperature' ? toStorage(n, temperatureUnit) : n;
+    }
+  }
+  return { family, parsed: family.paramsSchema.safeParse(raw) };
+}
+
 export const finishSchema = z
-  .object({
+  .looseObject({
+    family: z.enum(FAMILY_IDS, { error: 'Choose the process family.' }).default('electroplating'),
     finishId: z.preprocess((v) => (v === '' || v === undefined ? null : v), z.uuid().nullable()),
     code: z
       .string({ error: 'Enter a code.' })
@@ -28,14 +50,14 @@ export const finishSchema = z
       .refine((r) => r.length > 0, 'List at least one process step.')
       .refine((r) => r.length <= 30, 'Use at most 30 steps.')
       .refine((r) => r.every((s) => s.step.length <= 120 && (s.note ?? '').length <= 200), 'Keep each step under 120 characters and each note under 200.'),
-    metal: z.string({ error: 'Choose the metal.' }).refine((k) => PLATING_METALS.some((m) => m.key === k), 'Choose the metal.'),
+    metal: z.string().optional(),
     minThickness: numberField('the minimum thickness', { positive: true }),
     maxThickness: optionalNumberField('the maximum thickness', { positive: true }),
     thicknessUnit: unitEnum('thickness', 'thickness'),
     method: z.enum(['rack', 'barrel'], { error: 'Choose rack or barrel.' }),
-    currentDensity: numberField('the current density', { positive: true }),
+    currentDensity: optionalNumberField('the current density', { positive: true }),
     currentDensityUnit: unitEnum('currentDensity', 'current density'),
-    efficiencyPercent: numberField('the cathode efficiency', { positive: true, max: 100 }),
+    efficiencyPercent: optionalNumberField('the cathode efficiency', { positive: true, max: 100 }),
     distributionRatio: numberField('the distribution ratio', { positive: true, max: 1 }),
     tankVolts: numberField('the tank voltage', { positive: true, max: 50 }),
     partsPerLoad: numberField('the parts per load', { integer: true, min: 1, max: 10_000_000 }),
@@ -52,6 +74,12 @@ export const finishSchema = z
   })
   // `when`: run these checks even when other fields failed, so every message shows at once.
   .superRefine((v, ctx) => {
+    const family = getFamily(v.family);
+    if (!family.metal && !PLATING_METALS.some((m) => m.key === v.metal)) ctx.addIssue({ code: 'custom', path: ['metal'], message: 'Choose the metal.' });
+    if (family.usesCurrentDensity && v.currentDensity === null) ctx.addIssue({ code: 'custom', path: ['currentDensity'], message: 'Enter the current density.' });
+    if (family.usesEfficiency && v.efficiencyPercent === null) ctx.addIssue({ code: 'custom', path: ['efficiencyPercent'], message: 'Enter the cathode efficiency.' });
+    const { parsed } = familyParamsFrom(v, v.thicknessUnit ?? 'um', v.temperatureUnit ?? 'degC');
+    if (!parsed.success) for (const issue of parsed.error.issues) ctx.addIssue({ code: 'custom', path: [`fp_${String(issue.path[0] ?? '')}`], message: issue.message });
     if (typeof v.maxThickness === 'number' && typeof v.minThickness === 'number' && v.maxThickness <= v.minThickness) {
       ctx.addIssue({ code: 'custom', path: ['maxThickness'], message: 'The maximum must be more than the minimum.' });
     }
@@ -61,13 +89,16 @@ export const finishSchema = z
   .transform((v, ctx) => {
     const um = (x: number) => toStorage(x, v.thicknessUnit);
     const bakeTempC = v.bakeTemp === null ? null : toStorage(v.bakeTemp, v.temperatureUnit);
-    const adm2 = toStorage(v.currentDensity, v.currentDensityUnit);
+    const { family, parsed } = familyParamsFrom(v, v.thicknessUnit, v.temperatureUnit);
+    const adm2 = family.usesCurrentDensity && v.currentDensity !== null ? toStorage(v.currentDensity, v.currentDensityUnit) : null;
     // Table limits (finishes CHECKs): thickness < 5000 µm, current density ≤ 100 A/dm², bake 0–400 °C.
     if (um(v.minThickness) >= 5000) ctx.addIssue({ code: 'custom', path: ['minThickness'], message: 'That thickness is more than 5 mm.' });
-    if (adm2 > 100) ctx.addIssue({ code: 'custom', path: ['currentDensity'], message: 'That current density is above 100 A/dm².' });
+    if (adm2 !== null && adm2 > 100) ctx.addIssue({ code: 'custom', path: ['currentDensity'], message: 'That current density is above 100 A/dm².' });
     if (bakeTempC !== null && (bakeTempC <= 0 || bakeTempC >= 400)) ctx.addIssue({ code: 'custom', path: ['bakeTemp'], message: 'The bake temperature must be between 0 and 400 °C.' });
-    const metal = PLATING_METALS.find((m) => m.key === v.metal)!;
+    const metal = family.metal ?? PLATING_METALS.find((m) => m.key === v.metal)!;
     return {
+      family: family.id,
+      family_params: JSON.stringify(parsed.success ? parsed.data : {}),
       finishId: v.finishId,
       code: v.code,
       name: v.name,
@@ -79,7 +110,7 @@ export const finishSchema = z
       max_thickness_um: v.maxThickness === null ? null : um(v.maxThickness),
       method: v.method,
       current_density_adm2: adm2,
-      efficiency: v.efficiencyPercent / 100,
+      efficiency: family.usesEfficiency && v.efficiencyPercent !== null ? v.efficiencyPercent / 100 : null,
       distribution_ratio: v.distributionRatio,
       tank_volts: v.tankVolts,
       parts_per_load: v.partsPerLoad,

@@ -82,7 +82,7 @@ function costRows(conn: Db) {
     .selectFrom('plating_runs as r')
     .innerJoin('tanks as t', 't.id', 'r.tank_id')
     .select([
-      'r.work_order_id', 'r.amp_hours', 'r.loads', 'r.parts_per_load', 't.efficiency as tank_efficiency', 't.template_id',
+      'r.work_order_id', sql<number>`coalesce(r.amp_hours, 0)`.as('amp_hours'), 'r.loads', 'r.parts_per_load', 't.efficiency as tank_efficiency', 't.template_id',
       sql<number>`extract(epoch from (r.ended_at - r.started_at)) / 3600.0`.as('hours'),
     ]);
 }

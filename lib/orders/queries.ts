@@ -1,7 +1,8 @@
 import 'server-only';
 import { sql, type Kysely } from 'kysely';
 import { db as defaultDb } from '@/db';
-import type { Database, ProcessStep } from '@/db/types';
+import type { Database, ProcessFamilyId, ProcessStep } from '@/db/types';
+import { getFamily } from '@/lib/families';
 import type { GridColumns } from '@/lib/grid/server';
 import { activeTankFacts } from '@/lib/quotes/pricing-context';
 import { tanksForFinish } from '@/lib/quotes/process';
@@ -63,7 +64,7 @@ export async function getWorkOrder(workOrderId: string, conn: Db = defaultDb) {
       'p.id as part_id', 'p.part_number', 'p.revision as part_revision', 'p.description as part_description', 'p.substrate', 'p.area_dm2', 'p.weight_g', 'p.hardness_hrc', 'p.tensile_mpa',
       'f.id as finish_id', 'f.code as finish_code', 'f.name as finish_name', 'f.spec_text', 'f.process_route', 'f.element', 'f.ion_charge', 'f.min_thickness_um',
       'f.max_thickness_um', 'f.method', 'f.distribution_ratio', 'f.current_density_adm2', 'f.tank_volts', 'f.handling_minutes_per_load', 'f.masking_per_piece_cents',
-      'f.parts_per_load', 'f.line_id as finish_line_id', 'f.bake_temp_c', 'f.bake_hours', 'f.bake_window_hours',
+      'f.parts_per_load', 'f.line_id as finish_line_id', 'f.bake_temp_c', 'f.bake_hours', 'f.bake_window_hours', 'f.family', 'f.family_params',
       'q.id as quote_id', 'q.number as quote_number', 'q.revision as quote_revision', 'q.rate_set_id',
     ])
     .where('w.id', '=', workOrderId)
@@ -100,10 +101,14 @@ export async function findPlatingRuns(workOrderId: string, conn: Db = defaultDb)
     .execute();
 }
 
-/** Tanks a run for this finish may be logged on: active, plating the finish's metal, with a known efficiency. */
-export async function findTanksForFinish(finish: { element: string; ion_charge: number; method: 'rack' | 'barrel'; finish_line_id: string | null }, conn: Db = defaultDb) {
-  const facts = (await activeTankFacts(conn)).filter((t) => t.efficiency !== null);
-  return tanksForFinish({ element: finish.element, ionCharge: finish.ion_charge, method: finish.method, lineId: finish.finish_line_id }, facts);
+/** Tanks a run for this finish may be logged on: active, running the finish's family and metal; a plating tank with a known efficiency. */
+export async function findTanksForFinish(
+  finish: { family: ProcessFamilyId; family_params: unknown; element: string; ion_charge: number; method: 'rack' | 'barrel'; finish_line_id: string | null },
+  conn: Db = defaultDb,
+) {
+  const needsEfficiency = getFamily(finish.family).usesEfficiency;
+  const facts = (await activeTankFacts(conn)).filter((t) => !needsEfficiency || t.efficiency !== null);
+  return tanksForFinish({ family: finish.family, familyParams: finish.family_params, element: finish.element, ionCharge: finish.ion_charge, method: finish.method, lineId: finish.finish_line_id }, facts);
 }
 
 /** A customer's own work orders (scoped by the signed-in contact's company). */

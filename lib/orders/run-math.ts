@@ -19,10 +19,16 @@ function wholePositive(field: string, label: string, v: unknown, max: number): n
   return v;
 }
 
+/** Minutes per load, checked: above 0 and at most a day. */
+export function runMinutes(value: unknown): number {
+  const minutes = positive('minutesPerLoad', 'Minutes per load', value);
+  if (minutes > MAX_MINUTES_PER_LOAD) throw new PlatingInputError('minutesPerLoad', 'Minutes per load must be at most 1440 (one day).');
+  return minutes;
+}
+
 /** Amp-hours of the whole run: amps × minutes per load × loads, or meter stop − start. */
 export function runAmpHours(c: RunCharge): number {
-  const minutes = positive('minutesPerLoad', 'Plating minutes per load', c.minutesPerLoad);
-  if (minutes > MAX_MINUTES_PER_LOAD) throw new PlatingInputError('minutesPerLoad', 'Plating minutes per load must be at most 1440 (one day).');
+  const minutes = runMinutes(c.minutesPerLoad);
   const loads = wholePositive('loads', 'Loads', c.loads, 1000);
   if (c.mode === 'amps') return (positive('currentA', 'Rectifier current', c.currentA) * minutes * loads) / 60;
   if (typeof c.meterStartAh !== 'number' || !Number.isFinite(c.meterStartAh) || c.meterStartAh < 0) {

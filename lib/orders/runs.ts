@@ -4,9 +4,11 @@ import { z } from 'zod';
 import { db as defaultDb } from '@/db';
 import type { Database } from '@/db/types';
 import { AppError } from '@/lib/errors';
-import { PlatingInputError } from '@/lib/plating';
+import { PlatingInputError, toStorage, unitsOf, type UnitOf } from '@/lib/plating';
 import { assertCan, type Actor } from '@/lib/quotes/access';
-import { predictRun, runAmpHours, type RunCharge, type RunPrediction } from './run-math';
+import { familyOfTemplate, familyParams, getFamily } from '@/lib/families';
+import type { FamilyRunPrediction } from '@/lib/families/types';
+import { runAmpHours, runMinutes, type RunCharge } from './run-math';
 import { changeWorkOrderState } from './states';
 
 type Db = Kysely<Database>;
@@ -19,18 +21,22 @@ export const runSchema = z
   .object({
     workOrderId: z.uuid(),
     tankId: z.uuid({ error: 'Choose the tank.' }),
-    mode: z.enum(['amps', 'meter'], { error: 'Choose how the current was measured.' }),
+    // 'time': a run without current (electroless nickel, passivation), recorded by time and bath conditions.
+    mode: z.enum(['amps', 'meter', 'time'], { error: 'Choose how the current was measured.' }),
     currentA: decimal('the rectifier current'),
     meterStartAh: decimal('the meter reading at the start'),
     meterStopAh: decimal('the meter reading at the end'),
-    minutesPerLoad: decimal('the plating minutes per load'),
+    minutesPerLoad: decimal('the minutes per load'),
+    temperature: decimal('the bath temperature'),
+    temperatureUnit: z.enum(unitsOf('temperature') as [UnitOf<'temperature'>, ...UnitOf<'temperature'>[]]).optional(),
+    concentration: decimal('the acid concentration'),
     loads: whole('loads').max(1000),
     partsPerLoad: whole('parts per load').max(1_000_000),
     idempotencyKey: z.string().regex(/^[A-Za-z0-9-]{16,64}$/, 'The form is out of date; reload the page.'),
     confirmBelowMinimum: z.preprocess((v) => v === 'on' || v === 'true' || v === true, z.boolean()),
   })
   .superRefine((v, ctx) => {
-    if (v.minutesPerLoad === undefined) ctx.addIssue({ code: 'custom', path: ['minutesPerLoad'], message: 'Enter the plating minutes per load.' });
+    if (v.minutesPerLoad === undefined) ctx.addIssue({ code: 'custom', path: ['minutesPerLoad'], message: 'Enter the minutes per load.' });
     if (v.mode === 'amps' && v.currentA === undefined) ctx.addIssue({ code: 'custom', path: ['currentA'], message: 'Enter the rectifier current.' });
     if (v.mode === 'meter' && v.meterStartAh === undefined) ctx.addIssue({ code: 'custom', path: ['meterStartAh'], message: 'Enter the meter reading at the start.' });
     if (v.mode === 'meter' && v.meterStopAh === undefined) ctx.addIssue({ code: 'custom', path: ['meterStopAh'], message: 'Enter the meter reading at the end.' });
@@ -38,32 +44,43 @@ export const runSchema = z
 export type RunInput = z.infer<typeof runSchema>;
 
 export function chargeOf(input: RunInput): RunCharge {
-  return input.mode === 'amps'
-    ? { mode: 'amps', currentA: input.currentA ?? Number.NaN, minutesPerLoad: input.minutesPerLoad ?? Number.NaN, loads: input.loads }
-    : { mode: 'meter', meterStartAh: input.meterStartAh ?? Number.NaN, meterStopAh: input.meterStopAh ?? Number.NaN, minutesPerLoad: input.minutesPerLoad ?? Number.NaN, loads: input.loads };
+  return input.mode === 'meter'
+    ? { mode: 'meter', meterStartAh: input.meterStartAh ?? Number.NaN, meterStopAh: input.meterStopAh ?? Number.NaN, minutesPerLoad: input.minutesPerLoad ?? Number.NaN, loads: input.loads }
+    : { mode: 'amps', currentA: input.currentA ?? Number.NaN, minutesPerLoad: input.minutesPerLoad ?? Number.NaN, loads: input.loads };
 }
 
 export const BELOW_MINIMUM_MESSAGE = 'The predicted thickness is below the specification minimum. Check the current and time, or tick "Save anyway" to record the run as it was.';
 
-export type LoggedRun = { id: string; duplicate: boolean; prediction: RunPrediction | null };
+export type LoggedRun = { id: string; duplicate: boolean; prediction: FamilyRunPrediction | null; nonconformanceId: string | null };
+
+/** The bath conditions the run's family records, in storage units. */
+function conditionsOf(input: RunInput, wanted: readonly ('temperatureC' | 'concentration')[]): { temperatureC?: number; concentration?: number } {
+  const out: { temperatureC?: number; concentration?: number } = {};
+  if (wanted.includes('temperatureC') && input.temperature !== undefined) out.temperatureC = toStorage(input.temperature, input.temperatureUnit ?? 'degC');
+  if (wanted.includes('concentration') && input.concentration !== undefined) out.concentration = input.concentration;
+  return out;
+}
 
 /**
- * Records a plating run. A retried submission with the same idempotency key stores nothing new and
- * answers with the first run. The first run of a received order moves it to "in process".
+ * Records a run. A retried submission with the same idempotency key stores nothing new and answers
+ * with the first run. The first run of a received order moves it to "in process". The finish's
+ * family says what a run is: charge (plating, anodizing) or time and bath conditions (electroless,
+ * passivation); a passivation run outside its window is recorded as it was and opens a
+ * nonconformance, so the lot cannot be certified until quality disposes of it.
  */
 export async function logPlatingRun(actor: Actor, input: RunInput, conn: Db = defaultDb, now: Date = new Date()): Promise<LoggedRun> {
   assertCan(actor, 'runs.log');
   const existing = await conn.selectFrom('plating_runs').select(['id', 'work_order_id']).where('idempotency_key', '=', input.idempotencyKey).executeTakeFirst();
   if (existing) {
     if (existing.work_order_id !== input.workOrderId) throw new AppError('CONFLICT', 'This form was already used for another order; reload the page.');
-    return { id: existing.id, duplicate: true, prediction: null };
+    return { id: existing.id, duplicate: true, prediction: null, nonconformanceId: null };
   }
   return conn.transaction().execute(async (trx) => {
     const wo = await trx
       .selectFrom('work_orders as w')
       .innerJoin('parts as p', 'p.id', 'w.part_id')
       .innerJoin('finishes as f', 'f.id', 'w.finish_id')
-      .select(['w.id', 'w.state', 'p.area_dm2', 'f.element', 'f.ion_charge', 'f.distribution_ratio', 'f.min_thickness_um'])
+      .select(['w.id', 'w.state', 'p.area_dm2', 'f.family', 'f.family_params', 'f.element', 'f.ion_charge', 'f.distribution_ratio', 'f.min_thickness_um'])
       .where('w.id', '=', input.workOrderId)
       .forUpdate('w')
       .executeTakeFirst();
@@ -71,21 +88,43 @@ export async function logPlatingRun(actor: Actor, input: RunInput, conn: Db = de
     if (wo.state !== 'received' && wo.state !== 'in_process') {
       throw new AppError('CONFLICT', wo.state === 'accepted' ? 'Receive the parts before logging a plating run.' : 'Plating is finished on this order; runs can no longer be added.');
     }
-    const tank = await trx.selectFrom('tanks').select(['id', 'code', 'element', 'ion_charge', 'efficiency', 'rectifier_max_a', 'is_active']).where('id', '=', input.tankId).executeTakeFirst();
-    if (!tank || !tank.is_active || tank.element !== wo.element || tank.ion_charge !== wo.ion_charge || tank.efficiency === null) {
-      throw new AppError('BAD_INPUT', 'Choose an active tank that plates this finish’s metal.', { tankId: ['Choose an active tank that plates this finish’s metal.'] });
+    const family = getFamily(wo.family);
+    const params = familyParams(family.id, wo.family_params);
+    const tank = await trx
+      .selectFrom('tanks')
+      .select(['id', 'code', 'template_id', 'element', 'ion_charge', 'efficiency', 'rectifier_max_a', 'is_active', 'family_settings'])
+      .where('id', '=', input.tankId)
+      .executeTakeFirst();
+    const serves =
+      tank &&
+      tank.is_active &&
+      familyOfTemplate(tank.template_id) === family.id &&
+      family.tankServes({ templateId: tank.template_id, element: tank.element, ionCharge: tank.ion_charge }, { element: wo.element, ionCharge: wo.ion_charge, params }) &&
+      (!family.usesEfficiency || tank.efficiency !== null);
+    if (!tank || !serves) {
+      throw new AppError('BAD_INPUT', 'Choose an active tank that runs this finish.', { tankId: ['Choose an active tank that runs this finish.'] });
+    }
+    if ((input.mode === 'time') === family.runsWithCurrent) {
+      const message = family.runsWithCurrent ? 'Enter the rectifier current or the amp-hour meter readings.' : `${family.label} runs without current: enter the time and the bath conditions.`;
+      throw new AppError('BAD_INPUT', message, { mode: [message] });
     }
     if (input.mode === 'amps' && tank.rectifier_max_a !== null && (input.currentA ?? 0) > tank.rectifier_max_a) {
       throw new AppError('BAD_INPUT', `The rectifier on ${tank.code} gives at most ${tank.rectifier_max_a} A.`, { currentA: [`At most ${tank.rectifier_max_a} A on ${tank.code}.`] });
     }
-    let ampHours: number;
-    let prediction: RunPrediction;
+    let ampHours: number | null;
+    let prediction: FamilyRunPrediction;
+    const conditions = conditionsOf(input, family.runConditions);
     try {
-      ampHours = runAmpHours(chargeOf(input));
-      prediction = predictRun({
-        ampHours, loads: input.loads, partsPerLoad: input.partsPerLoad, areaPerPartDm2: wo.area_dm2, element: wo.element, ionCharge: wo.ion_charge,
-        tankEfficiency: tank.efficiency, distributionRatio: wo.distribution_ratio, minThicknessUm: wo.min_thickness_um,
-      });
+      ampHours = family.runsWithCurrent ? runAmpHours(chargeOf(input)) : null;
+      if (ampHours === null) runMinutes(input.minutesPerLoad ?? Number.NaN);
+      prediction = family.predictRun(
+        {
+          ampHours, minutesPerLoad: input.minutesPerLoad ?? Number.NaN, loads: input.loads, partsPerLoad: input.partsPerLoad, areaPerPartDm2: wo.area_dm2,
+          finish: { element: wo.element, ionCharge: wo.ion_charge, distributionRatio: wo.distribution_ratio, minThicknessUm: wo.min_thickness_um },
+          tank: { efficiency: tank.efficiency, settings: tank.family_settings }, conditions,
+        },
+        params,
+      );
     } catch (err) {
       if (err instanceof PlatingInputError) throw new AppError('BAD_INPUT', err.message, { [err.field]: [err.message] });
       throw err;
@@ -103,6 +142,7 @@ export async function logPlatingRun(actor: Actor, input: RunInput, conn: Db = de
         meter_start_ah: input.mode === 'meter' ? (input.meterStartAh ?? null) : null,
         meter_stop_ah: input.mode === 'meter' ? (input.meterStopAh ?? null) : null,
         amp_hours: ampHours,
+        conditions: JSON.stringify(conditions),
         loads: input.loads,
         parts_per_load: input.partsPerLoad,
         predicted_thickness_um: prediction.averageThicknessUm,
@@ -116,11 +156,20 @@ export async function logPlatingRun(actor: Actor, input: RunInput, conn: Db = de
     if (!inserted) {
       // A concurrent retry won the race: answer with its run.
       const first = await trx.selectFrom('plating_runs').select('id').where('idempotency_key', '=', input.idempotencyKey).executeTakeFirstOrThrow();
-      return { id: first.id, duplicate: true, prediction };
+      return { id: first.id, duplicate: true, prediction, nonconformanceId: null };
+    }
+    let nonconformanceId: string | null = null;
+    if (prediction.outsideWindow.length) {
+      const nc = await trx
+        .insertInto('nonconformances')
+        .values({ work_order_id: wo.id, source: 'other', description: `Run on ${tank.code} outside the process window: ${prediction.outsideWindow.join(' ')}`.slice(0, 2000), opened_by: actor.id })
+        .returning('id')
+        .executeTakeFirstOrThrow();
+      nonconformanceId = nc.id;
     }
     if (wo.state === 'received') {
-      await changeWorkOrderState(trx, { workOrderId: wo.id, to: 'in_process', actorId: actor.id, note: `First plating run on ${tank.code}` });
+      await changeWorkOrderState(trx, { workOrderId: wo.id, to: 'in_process', actorId: actor.id, note: `First run on ${tank.code}` });
     }
-    return { id: inserted.id, duplicate: false, prediction };
+    return { id: inserted.id, duplicate: false, prediction, nonconformanceId };
   });
 }

@@ -69,7 +69,7 @@ export function TravelerDocument({ wo, shop, qrPng, units }: { wo: WorkOrderDeta
           <Text style={{ fontWeight: 600 }}>{wo.finish_code} · {wo.finish_name}</Text>
           {wo.spec_text ? <Text>{wo.spec_text}</Text> : null}
           <Text style={pdf.small}>
-            {wo.method === 'rack' ? 'Rack' : 'Barrel'} · {formatStoredQuantity(wo.current_density_adm2, 'currentDensity', units)} · minimum{' '}
+            {wo.method === 'rack' ? 'Rack' : 'Barrel'}{wo.current_density_adm2 !== null ? ` · ${formatStoredQuantity(wo.current_density_adm2, 'currentDensity', units)}` : ''} · minimum{' '}
             {formatStoredQuantity(wo.min_thickness_um, 'thickness', units)} on significant surfaces
           </Text>
         </Labelled>

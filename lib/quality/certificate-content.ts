@@ -20,7 +20,7 @@ export type CertificateContent = {
   order: { number: string; poNumber: string; quantity: number };
   part: { number: string; revision: string; description: string; substrate: string };
   finish: { code: string; name: string; specText: string; minThicknessUm: number; maxThicknessUm: number | null };
-  runs: { tankCode: string; tankName: string; endedAt: string; ampHours: number }[];
+  runs: { tankCode: string; tankName: string; endedAt: string; ampHours: number | null }[];
   bath: BathSnapshot;
   thickness: {
     planName: string;

@@ -79,10 +79,10 @@ export function BathSection({ k, c, at }: { k: Kit; c: CertificateContent; at: (
   const tanks = new Map<string, { name: string; runs: number; ampHours: number; lastEnd: string }>();
   for (const r of c.runs) {
     const t = tanks.get(r.tankCode) ?? { name: r.tankName, runs: 0, ampHours: 0, lastEnd: r.endedAt };
-    tanks.set(r.tankCode, { name: t.name, runs: t.runs + 1, ampHours: t.ampHours + r.ampHours, lastEnd: r.endedAt > t.lastEnd ? r.endedAt : t.lastEnd });
+    tanks.set(r.tankCode, { name: t.name, runs: t.runs + 1, ampHours: t.ampHours + (r.ampHours ?? 0), lastEnd: r.endedAt > t.lastEnd ? r.endedAt : t.lastEnd });
   }
   const runs = [...tanks]
-    .map(([code, t]) => `${code} ${t.name} (${t.runs} ${t.runs === 1 ? 'run' : 'runs'}, ${t.ampHours.toFixed(1)} A·h, last ended ${at(t.lastEnd)})`)
+    .map(([code, t]) => `${code} ${t.name} (${t.runs} ${t.runs === 1 ? 'run' : 'runs'}${t.ampHours > 0 ? `, ${t.ampHours.toFixed(1)} A·h` : ''}, last ended ${at(t.lastEnd)})`)
     .join('; ');
   return (
     <View style={pdfStyles.section} wrap={false}>

@@ -8,7 +8,8 @@ import { thicknessFromCharge } from '@/lib/plating';
 export type EfficiencyRun = {
   tankId: string;
   tankElement: string | null;
-  ampHours: number;
+  /** Null for a run without current: it adds no charge. */
+  ampHours: number | null;
   loads: number;
   partsPerLoad: number;
   predictedThicknessUm: number;
@@ -45,7 +46,7 @@ export function lotEfficiency(input: {
   if (!(input.partAreaDm2 > 0)) return { ok: false, reason: 'The part has no area.' };
   if (!(input.measuredMeanUm > 0)) return { ok: false, reason: 'No measured thickness.' };
   const parts = runs.reduce((s, r) => s + r.loads * r.partsPerLoad, 0);
-  const ampHours = runs.reduce((s, r) => s + r.ampHours, 0);
+  const ampHours = runs.reduce((s, r) => s + (r.ampHours ?? 0), 0);
   if (!(parts > 0) || !(ampHours > 0)) return { ok: false, reason: 'The runs record no parts or no amp-hours.' };
   const areaDm2 = parts * input.partAreaDm2;
   const theoreticalUm = thicknessFromCharge({ element: input.element, charge: input.ionCharge, areaDm2, ampHours, efficiency: 1 }).thicknessUm;

@@ -50,7 +50,10 @@ export type LotRun = {
   tankElement: string | null;
   startedAt: Date;
   endedAt: Date;
-  ampHours: number;
+  /** Null for a run without current (electroless nickel, passivation). */
+  ampHours: number | null;
+  /** Bath conditions of a run without current (temperatureC, concentration). */
+  conditions: Record<string, number>;
   loads: number;
   partsPerLoad: number;
   predictedThicknessUm: number;

@@ -52,7 +52,7 @@ export async function loadLot(db: Db, workOrderId: string): Promise<LotRecord | 
     db
       .selectFrom('plating_runs as r')
       .innerJoin('tanks as t', 't.id', 'r.tank_id')
-      .select(['r.id', 'r.tank_id', 't.code', 't.name', 't.element', 'r.started_at', 'r.ended_at', 'r.amp_hours', 'r.loads', 'r.parts_per_load', 'r.predicted_thickness_um'])
+      .select(['r.id', 'r.tank_id', 't.code', 't.name', 't.element', 'r.started_at', 'r.ended_at', 'r.amp_hours', 'r.conditions', 'r.loads', 'r.parts_per_load', 'r.predicted_thickness_um'])
       .where('r.work_order_id', '=', workOrderId)
       .orderBy('r.ended_at')
       .execute(),
@@ -105,7 +105,7 @@ export async function loadLot(db: Db, workOrderId: string): Promise<LotRecord | 
     },
     runs: runs.map((r) => ({
       id: r.id, tankId: r.tank_id, tankCode: r.code, tankName: r.name, tankElement: r.element, startedAt: r.started_at, endedAt: r.ended_at,
-      ampHours: r.amp_hours, loads: r.loads, partsPerLoad: r.parts_per_load, predictedThicknessUm: r.predicted_thickness_um,
+      ampHours: r.amp_hours, conditions: r.conditions, loads: r.loads, partsPerLoad: r.parts_per_load, predictedThicknessUm: r.predicted_thickness_um,
     })),
     readings: readings.map((r) => ({
       id: r.id, partNo: r.part_no, location: r.location, method: r.method, thicknessUm: r.thickness_um, minimumUm: r.minimum_um,

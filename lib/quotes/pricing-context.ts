@@ -4,7 +4,8 @@ import { db as defaultDb } from '@/db';
 import type { Database, PricingBasis, RateSet } from '@/db/types';
 import { AppError } from '@/lib/errors';
 import { PlatingInputError } from '@/lib/plating';
-import { priceLine, type LinePrice, type PricingInput, type PricingRates } from './pricing';
+import { priceFinishLine } from '@/lib/families';
+import type { LinePrice, PricingInput, PricingRates } from './pricing';
 import { processForFinish, type TankFacts } from './process';
 
 // Loads what pricing needs from the records and prices one line; the engine's input errors become
@@ -41,7 +42,7 @@ export type ActiveTank = TankFacts & { name: string; hasAhMeter: boolean };
 export async function activeTankFacts(conn: Db = defaultDb): Promise<ActiveTank[]> {
   const rows = await conn
     .selectFrom('tanks')
-    .select(['id', 'code', 'name', 'has_ah_meter', 'line_id', 'template_id', 'element', 'ion_charge', 'efficiency', 'rectifier_max_a', 'anode_type', 'is_active'])
+    .select(['id', 'code', 'name', 'has_ah_meter', 'line_id', 'template_id', 'element', 'ion_charge', 'efficiency', 'rectifier_max_a', 'anode_type', 'is_active', 'volume_l', 'family_settings'])
     .where('is_active', '=', true)
     .execute();
   return rows.map((t) => ({
@@ -57,6 +58,8 @@ export async function activeTankFacts(conn: Db = defaultDb): Promise<ActiveTank[
     rectifierMaxA: t.rectifier_max_a,
     anodeType: t.anode_type,
     isActive: t.is_active,
+    volumeL: t.volume_l,
+    familySettings: t.family_settings,
   }));
 }
 
@@ -83,16 +86,24 @@ export async function priceRequest(conn: Db, req: LineRequest): Promise<PricedLi
   if (!finish || !finish.is_active) throw new AppError('BAD_INPUT', 'That finish is not available.', { finishId: ['Choose an active finish.'] });
   if (!rateSet) throw new AppError('CONFLICT', 'The rate set of this quote no longer exists.');
   try {
-    const resolved = processForFinish({ element: finish.element, ionCharge: finish.ion_charge, method: finish.method, lineId: finish.line_id }, tanks);
+    const resolved = processForFinish(
+      { family: finish.family, familyParams: finish.family_params, element: finish.element, ionCharge: finish.ion_charge, method: finish.method, lineId: finish.line_id },
+      tanks,
+    );
     const input: PricingInput = {
-      part: { areaDm2: part.area_dm2, weightG: part.weight_g, hardnessHrc: part.hardness_hrc, tensileMpa: part.tensile_mpa },
+      part: {
+        areaDm2: part.area_dm2, weightG: part.weight_g, hardnessHrc: part.hardness_hrc, tensileMpa: part.tensile_mpa,
+        corrosivityCategory: part.corrosivity_category, designLifeYears: part.design_life_years,
+      },
       finish: {
+        family: finish.family,
+        familyParams: finish.family_params,
         element: finish.element,
         ionCharge: finish.ion_charge,
         minThicknessUm: finish.min_thickness_um,
         method: finish.method,
-        currentDensityAdm2: finish.current_density_adm2,
-        efficiency: finish.efficiency,
+        currentDensityAdm2: finish.current_density_adm2 ?? 0,
+        efficiency: finish.efficiency ?? 1,
         distributionRatio: finish.distribution_ratio,
         tankVolts: finish.tank_volts,
         partsPerLoad: finish.parts_per_load,
@@ -107,7 +118,7 @@ export async function priceRequest(conn: Db, req: LineRequest): Promise<PricedLi
       isRush: req.isRush,
       basis: req.basis,
     };
-    return { input, price: priceLine(input), tankCode: resolved.tankCode };
+    return { input, price: priceFinishLine(input), tankCode: resolved.tankCode };
   } catch (err) {
     return asFormError(err);
   }

@@ -3,8 +3,10 @@
 // Pure: the caller passes the tanks.
 import { metalFraction } from '@/lib/chemistry/formula';
 import { getTemplate } from '@/lib/bath/templates';
-import { PlatingInputError, type JobProcess } from '@/lib/plating';
-import type { PricedFinish, ShopProcess } from './pricing';
+import type { ProcessFamilyId } from '@/db/types';
+import { familyOfTemplate, familyParams, getFamily } from '@/lib/families';
+import { PlatingInputError } from '@/lib/plating';
+import type { ShopProcess } from './pricing';
 
 // Common practice (reference §11, from memory): rectifiers run at about 75–95 % efficiency;
 // 0.85 is the reference's worked example.
@@ -25,9 +27,18 @@ export type TankFacts = {
   rectifierMaxA: number | null;
   anodeType: 'soluble' | 'insoluble' | 'none';
   isActive: boolean;
+  volumeL: number;
+  familySettings: Record<string, unknown>;
 };
 
-export type FinishFacts = { element: string; ionCharge: number; method: 'rack' | 'barrel'; lineId: string | null };
+export type FinishFacts = {
+  family?: ProcessFamilyId;
+  familyParams?: unknown;
+  element: string;
+  ionCharge: number;
+  method: 'rack' | 'barrel';
+  lineId: string | null;
+};
 
 // Bath analytes that hold the metal itself, or a salt of it (converted with its metal fraction).
 const METAL_ANALYTE: Record<string, string> = { Ni: 'nickel', Zn: 'zinc', Sn: 'tin', Ag: 'silver', Au: 'gold', Cu: 'copper', Cr: 'chromium' };
@@ -47,41 +58,30 @@ export function bathMetalGPerL(templateId: string, element: string): number {
   return salt && saltRow ? saltRow.target * metalFraction(salt.formula, element) : 0;
 }
 
-export type FinishProcessFacts = Pick<PricedFinish, 'element' | 'ionCharge' | 'method' | 'currentDensityAdm2' | 'efficiency' | 'distributionRatio' | 'partsPerLoad' | 'tankVolts'>;
-
-/** The engine's process fields a finish fixes; the shop's tank supplies the rest (ShopProcess). */
-export function finishProcess(finish: FinishProcessFacts) {
-  return {
-    element: finish.element,
-    charge: finish.ionCharge,
-    currentDensityAdm2: finish.currentDensityAdm2,
-    efficiency: finish.efficiency,
-    loading: finish.method,
-    distributionRatio: finish.distributionRatio,
-    partsPerLoad: finish.partsPerLoad,
-    tankVolts: finish.tankVolts,
-  } satisfies Partial<JobProcess>;
-}
-
-/** Active tanks that deposit the finish's metal, those on the finish's own line first. */
+/** Active tanks that can run the finish (its family decides), those on the finish's own line first. */
 export function tanksForFinish<T extends TankFacts>(finish: FinishFacts, tanks: readonly T[]): T[] {
+  const family = getFamily(finish.family);
+  const params = familyParams(family.id, finish.familyParams);
   return tanks
-    .filter((t) => t.isActive && t.element === finish.element && t.ionCharge === finish.ionCharge)
+    .filter((t) => t.isActive && familyOfTemplate(t.templateId) === family.id && family.tankServes(t, { element: finish.element, ionCharge: finish.ionCharge, params }))
     .sort((a, b) => Number(b.lineId === finish.lineId) - Number(a.lineId === finish.lineId) || a.code.localeCompare(b.code));
 }
 
 export type ResolvedProcess = { process: ShopProcess; tankId: string; tankCode: string };
 
 export function processForFinish(finish: FinishFacts, tanks: readonly TankFacts[]): ResolvedProcess {
-  const tank = tanksForFinish(finish, tanks).find((t) => t.rectifierMaxA !== null);
+  const family = getFamily(finish.family);
+  const tank = tanksForFinish(finish, tanks).find((t) => !family.runsWithCurrent || t.rectifierMaxA !== null);
   if (!tank) {
-    throw new PlatingInputError('finish', `No active tank with a rectifier plates ${finish.element} for this finish. Add or activate one before pricing.`);
+    const what = family.metal ? `${family.label.toLowerCase()} for this finish` : `${finish.element} for this finish`;
+    throw new PlatingInputError('finish', `No active tank${family.runsWithCurrent ? ' with a rectifier' : ''} runs ${what}. Add or activate one before pricing.`);
   }
   return {
     tankId: tank.id,
     tankCode: tank.code,
     process: {
-      rectifierMaxA: tank.rectifierMaxA as number,
+      tank: { volumeL: tank.volumeL, settings: tank.familySettings },
+      rectifierMaxA: tank.rectifierMaxA ?? 0,
       rectifierEfficiency: DEFAULT_RECTIFIER_EFFICIENCY,
       dragOutLPerM2: DEFAULT_DRAG_OUT_L_PER_M2[finish.method],
       bathMetalGPerL: bathMetalGPerL(tank.templateId, finish.element),

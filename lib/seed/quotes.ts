@@ -9,6 +9,7 @@ import { addQuoteLine, createQuote } from '@/lib/quotes/mutations';
 import type { LinePrice } from '@/lib/quotes/pricing';
 import { advanceWorkOrder } from '@/lib/orders/mutations';
 import { findTanksForFinish, getWorkOrder } from '@/lib/orders/queries';
+import { familyParams, getFamily } from '@/lib/families';
 import { logPlatingRun } from '@/lib/orders/runs';
 
 const MARKER = 'seed.quotes';
@@ -47,14 +48,19 @@ async function runOrder(db: Kysely<Database>, woId: string, people: { plater: Ac
   if (!tank || !cost.job) return;
   const perLoad = cost.job.partsPerLoad;
   const loads = Math.ceil(wo.quantity_ordered / perLoad);
-  const currentA = Math.round(wo.current_density_adm2 * perLoad * wo.area_dm2);
+  const family = getFamily(wo.family);
+  const params = familyParams(family.id, wo.family_params);
+  const currentA = Math.round((wo.current_density_adm2 ?? 0) * perLoad * wo.area_dm2);
+  // A run without current reads the bath as the finish sets it (the plater's thermometer and the latest titration).
+  const conditions = { temperature: typeof params.temperatureC === 'number' ? params.temperatureC : 88, concentration: typeof params.concentration === 'number' ? params.concentration : undefined };
   for (let i = 0; i < loads; i++) {
     const parts = Math.min(perLoad, wo.quantity_ordered - i * perLoad);
     await logPlatingRun(
       people.plater,
       {
-        workOrderId: woId, tankId: tank.id, mode: 'amps', currentA: Math.max(1, Math.round((currentA * parts) / perLoad)), meterStartAh: undefined, meterStopAh: undefined,
+        workOrderId: woId, tankId: tank.id, mode: family.runsWithCurrent ? 'amps' : 'time', currentA: Math.max(1, Math.round((currentA * parts) / perLoad)), meterStartAh: undefined, meterStopAh: undefined,
         minutesPerLoad: Math.round(cost.job.minutesPerLoad * opts.timeFactor), loads: 1, partsPerLoad: parts,
+        ...(family.runsWithCurrent ? {} : conditions),
         idempotencyKey: `seed-run-${woId}-${i}`, confirmBelowMinimum: true,
       },
       db,

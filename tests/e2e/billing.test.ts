@@ -191,7 +191,7 @@ describe('billing', () => {
       await apply.getByLabel('Invoice').selectOption(second.id);
       await apply.getByLabel('Amount ($)').fill('42.75');
       await apply.getByRole('button', { name: 'Apply credit' }).click();
-      await page.getByText('Credit applied.').waitFor();
+      await page.getByText('Credit applied. The other invoice shows it in its payment history.').waitFor();
       await page.goto(`${APP_URL}/invoices/${second.id}`);
       await page.getByText(`Credit from invoice ${first.number}`).waitFor();
       await page.getByText('Partly paid', { exact: true }).first().waitFor();

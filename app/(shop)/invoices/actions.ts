@@ -40,13 +40,14 @@ export const applyCreditAction = formAction('invoices.issue', applyCreditSchema,
   await applyCredit(user.id, input);
   revalidatePath(`/invoices/${input.fromInvoiceId}`);
   revalidatePath(`/invoices/${input.toInvoiceId}`);
-  return { ok: true, message: 'Credit applied.' };
+  // The form goes away once the credit is used up, so the page itself says what happened.
+  redirect(`/invoices/${input.fromInvoiceId}?notice=credit-applied`);
 });
 
 export const refundExcessAction = formAction('invoices.issue', refundExcessSchema, async (input, user) => {
-  const result = await refundExcess(user.id, input);
+  await refundExcess(user.id, input);
   revalidatePath(`/invoices/${input.invoiceId}`);
-  return { ok: true, message: result.message };
+  redirect(`/invoices/${input.invoiceId}?notice=refunded`);
 });
 
 export const resolveExceptionAction = formAction('invoices.issue', resolveExceptionSchema, async (input, user) => {

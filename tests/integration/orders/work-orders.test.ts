@@ -53,7 +53,7 @@ describe('work-order steps', () => {
   it('refuses the wrong tank, too much current and an unconfirmed thin run', async () => {
     const id = await order('screw', 'ZN-B633-SC2-HS', 1500);
     await advanceWorkOrder(people.plater, step(id, 'received', { quantityReceived: 1500 }));
-    expect(await outcome(logPlatingRun(people.plater, run(id, tanks.nickel)))).toMatch(/^BAD_INPUT: Choose an active tank that plates this finish/);
+    expect(await outcome(logPlatingRun(people.plater, run(id, tanks.nickel)))).toMatch(/^BAD_INPUT: Choose an active tank that runs this finish/);
     expect(await outcome(logPlatingRun(people.plater, run(id, tanks.zinc, { currentA: 2500 })))).toBe('BAD_INPUT: The rectifier on Z-ZN1 gives at most 2000 A.');
     expect(await outcome(logPlatingRun(people.plater, run(id, tanks.zinc, { minutesPerLoad: 5 })))).toMatch(/^CONFLICT: The predicted thickness is below the specification minimum/);
     expect(await outcome(logPlatingRun(people.plater, run(id, tanks.zinc, { mode: 'meter', currentA: undefined, meterStartAh: 500, meterStopAh: 400 })))).toBe('BAD_INPUT: The meter reading at the end must be higher than at the start.');

@@ -18,10 +18,19 @@ const IDS = [
   'trivalent-chromium',
   'alkaline-electrocleaner',
   'hydrochloric-acid-dip',
+  'trivalent-passivate',
+  // the other process families' baths (lib/families)
+  'electroless-nickel-mid-phos',
+  'sulfuric-anodize',
+  'hard-anodize',
+  'hot-water-seal',
+  'nickel-acetate-seal',
+  'nitric-passivation',
+  'citric-passivation',
 ];
 
 describe('bath templates', () => {
-  it('include the fourteen baths, each consistent and carrying the supplier note', () => {
+  it("include every family's baths, each consistent and carrying the supplier note", () => {
     expect(BATH_TEMPLATES.map((t) => t.id).sort()).toEqual([...IDS].sort());
     for (const t of BATH_TEMPLATES) {
       expect(validateTemplate(t), t.id).toEqual([]);

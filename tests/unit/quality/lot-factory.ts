@@ -35,7 +35,7 @@ export function makeLot(over: Partial<LotRecord> = {}): LotRecord {
     runs: [
       {
         id: 'run-1', tankId: 't-zn', tankCode: 'Z-ZN1', tankName: 'Alkaline zinc', tankElement: 'Zn', startedAt: new Date('2026-06-10T13:00:00Z'),
-        endedAt: new Date('2026-06-10T14:00:00Z'), ampHours: 12, loads: 1, partsPerLoad: 40, predictedThicknessUm: 11,
+        endedAt: new Date('2026-06-10T14:00:00Z'), ampHours: 12, conditions: {}, loads: 1, partsPerLoad: 40, predictedThicknessUm: 11,
       },
     ],
     readings: [],

@@ -44,7 +44,7 @@ describe('bake rule', () => {
 
 describe('shop process for pricing', () => {
   const tank = (over: Partial<TankFacts>): TankFacts => ({
-    id: 't', code: 'T', lineId: 'L1', templateId: 'watts-nickel', element: 'Ni', ionCharge: 2, efficiency: 0.95, rectifierMaxA: 1000, anodeType: 'soluble', isActive: true, ...over,
+    id: 't', code: 'T', lineId: 'L1', templateId: 'watts-nickel', element: 'Ni', ionCharge: 2, efficiency: 0.95, rectifierMaxA: 1000, anodeType: 'soluble', isActive: true, volumeL: 1000, familySettings: {}, ...over,
   });
 
   it('reads the bath metal from the tank template, converting a salt to its metal', () => {

@@ -21,7 +21,7 @@ export default async function FinishPage({ params }: { params: Promise<{ finishI
     <div className="flex flex-col gap-4">
       <PageHeader eyebrow={<Link href="/finishes">← Finishes</Link>} title={finish.name} meta={<Badge tone="outline">{finish.code}</Badge>} description={finish.spec_text || undefined} />
       <Card>
-        <FinishForm defaults={finishFormDefaults(finish, user.unitSystem)} lines={lines} readOnly={!can(user, 'quotes.write')} />
+        <FinishForm defaults={finishFormDefaults(finish, user.unitSystem)} lines={lines} readOnly={!can(user, 'quotes.write')} units={user.unitSystem} />
       </Card>
     </div>
   );

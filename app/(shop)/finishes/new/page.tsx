@@ -16,7 +16,7 @@ export default async function NewFinishPage() {
     <div className="flex flex-col gap-4">
       <PageHeader eyebrow={<Link href="/finishes">← Finishes</Link>} title="New finish" />
       <Card>
-        <FinishForm defaults={finishFormDefaults(null, user.unitSystem)} lines={lines} readOnly={false} />
+        <FinishForm defaults={finishFormDefaults(null, user.unitSystem)} lines={lines} readOnly={false} units={user.unitSystem} />
       </Card>
     </div>
   );

@@ -15,7 +15,12 @@ import { ApplyCreditForm, CreditNoteForm, ManualPaymentForm, RefundExcessForm, R
 
 export const metadata: Metadata = { title: 'Invoice' };
 
-type Props = { params: Promise<{ invoiceId: string }>; searchParams: Promise<{ issued?: string; mailed?: string }> };
+type Props = { params: Promise<{ invoiceId: string }>; searchParams: Promise<{ issued?: string; mailed?: string; notice?: string }> };
+
+const NOTICES: Record<string, string> = {
+  'credit-applied': 'Credit applied. The other invoice shows it in its payment history.',
+  refunded: 'Refund recorded. It shows in the payment history below.',
+};
 
 export default async function InvoicePage({ params, searchParams }: Props) {
   const { invoiceId } = await params;
@@ -23,7 +28,7 @@ export default async function InvoicePage({ params, searchParams }: Props) {
   const detail = await getInvoiceDetail('staff', invoiceId);
   if (!detail) notFound();
   const { invoice, summary, customer } = detail;
-  const { issued, mailed } = await searchParams;
+  const { issued, mailed, notice } = await searchParams;
   const reminders = await findReminders(invoice.id);
   const mayIssue = can(user, 'invoices.issue');
   const open = summary.openCents > 0;
@@ -46,6 +51,7 @@ export default async function InvoicePage({ params, searchParams }: Props) {
           </a>
         }
       />
+      {notice && NOTICES[notice] ? <FormMessage tone="success" message={NOTICES[notice]} /> : null}
       {issued ? (
         <FormMessage
           tone={mailed === '1' ? 'success' : 'error'}

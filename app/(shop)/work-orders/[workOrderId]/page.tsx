@@ -142,8 +142,8 @@ export default async function WorkOrderPage({ params }: { params: Promise<{ work
                 <Tr key={r.id}>
                   <Td>{formatDateTime(r.ended_at)}</Td>
                   <Td>{r.tank_code}</Td>
-                  <Td numeric>{r.current_a !== null ? `${formatNumber(r.current_a, 4)} A` : `meter ${formatNumber(r.meter_start_ah ?? 0, 6)}→${formatNumber(r.meter_stop_ah ?? 0, 6)}`}</Td>
-                  <Td numeric>{formatNumber(r.amp_hours, 4)} A·h</Td>
+                  <Td numeric>{r.current_a !== null ? `${formatNumber(r.current_a, 4)} A` : r.meter_start_ah !== null ? `meter ${formatNumber(r.meter_start_ah, 6)}→${formatNumber(r.meter_stop_ah ?? 0, 6)}` : 'no current'}</Td>
+                  <Td numeric>{r.amp_hours === null ? '—' : `${formatNumber(r.amp_hours, 4)} A·h`}</Td>
                   <Td numeric>
                     {r.loads} × {r.parts_per_load}
                   </Td>

@@ -1,0 +1,157 @@
+// Electroless nickel: no current. Time comes from the bath's deposition rate; the nickel taken from
+// the bath is the deposit less its phosphorus; and each job uses a share of the bath's life, counted
+// in metal turnovers, whose make-up and disposal cost is spread over the turnovers the shop gets.
+import { z } from 'zod';
+import { electrolessCalc, PlatingInputError } from '@/lib/plating';
+import {
+  assembleLinePrice,
+  bakeFor,
+  checkFinishCharges,
+  checkRates,
+  commonComponents,
+  costComponent,
+  metalRate,
+  type FamilyFigure,
+  type PricingInput,
+} from '@/lib/quotes/pricing';
+import { runArea, thicknessVerdict } from '../run-checks';
+import type { ProcessFamily } from '../types';
+import { EN_METHODS, EN_TEMPLATES } from './bath';
+
+const paramsSchema = z.object({
+  depositionRateUmPerH: z.coerce.number({ error: 'Enter the bath’s deposition rate.' }).positive('Enter a rate above 0.').max(100, 'Give the rate in µm per hour (about 10–25).'),
+  phosphorusWtPct: z.coerce.number({ error: 'Enter the phosphorus content.' }).min(0, 'Use 0–15 %.').max(15, 'Use 0–15 %.'),
+  densityGPerCm3: z.coerce.number().positive().max(25, 'Give the density in g/cm³ (about 8).').optional(),
+});
+export type ElectrolessParams = z.infer<typeof paramsSchema>;
+
+/** A tank's electroless settings, with the shop's defaults where it has none (common practice). */
+export const enTankSettingsSchema = z.object({
+  nickelMakeUpGPerL: z.coerce.number().positive().max(50).default(6),
+  endOfLifeMto: z.coerce.number().positive().max(50).default(8),
+  makeUpCostCents: z.coerce.number().int().min(0).default(0),
+  disposalCostCents: z.coerce.number().int().min(0).default(0),
+});
+export type EnTankSettings = z.infer<typeof enTankSettingsSchema>;
+
+export function enTankSettings(settings: Record<string, unknown> | undefined): EnTankSettings {
+  return enTankSettingsSchema.parse(settings ?? {});
+}
+
+// Common practice (from memory): above about 2 dm² of work per litre an electroless bath runs
+// unstable and slows.
+const MAX_LOADING_DM2_PER_L = 2;
+
+function price(input: PricingInput, params: ElectrolessParams) {
+  const { part, finish, process, rates } = input;
+  checkRates(rates);
+  checkFinishCharges(finish);
+  if (!Number.isSafeInteger(input.quantity) || input.quantity < 1) throw new PlatingInputError('quantity', 'The quantity must be a whole number of at least 1.');
+  if (!process.tank) throw new PlatingInputError('finishId', 'No electroless nickel tank is set up to price this finish.');
+  const nickelPrice = metalRate(rates, 'Ni');
+  const tank = enTankSettings(process.tank.settings);
+  const targetUm = finish.minThicknessUm / finish.distributionRatio;
+  const partsPerLoad = Math.min(finish.partsPerLoad, input.quantity);
+  const loads = Math.ceil(input.quantity / partsPerLoad);
+  const lot = electrolessCalc({
+    areaDm2: part.areaDm2 * input.quantity,
+    thicknessUm: targetUm,
+    depositionRateUmPerH: params.depositionRateUmPerH,
+    phosphorusWtPct: params.phosphorusWtPct,
+    densityGPerCm3: params.densityGPerCm3,
+    bathVolumeL: process.tank.volumeL,
+    nickelMakeUpGPerL: tank.nickelMakeUpGPerL,
+  });
+  const tankHours = (loads * lot.minutes) / 60;
+  const loadingDm2PerL = (part.areaDm2 * partsPerLoad) / process.tank.volumeL;
+  const costPerMtoCents = (tank.makeUpCostCents + tank.disposalCostCents) / tank.endOfLifeMto;
+  const bake = bakeFor(input);
+  const figures: FamilyFigure[] = [
+    { key: 'deposit', label: 'Deposit, nominal', value: targetUm, quantity: 'thickness' },
+    { key: 'minutes', label: `Time per load at ${params.depositionRateUmPerH} µm/h`, value: lot.minutes, unit: 'min', digits: 1 },
+    { key: 'phosphorus', label: 'Phosphorus in the deposit', value: params.phosphorusWtPct, unit: '% by weight', digits: 1 },
+    { key: 'density', label: params.densityGPerCm3 ? 'Deposit density' : 'Deposit density (from the phosphorus content)', value: lot.densityGPerCm3, unit: 'g/cm³', digits: 2 },
+    { key: 'nickel', label: 'Nickel taken from the bath', value: lot.nickelConsumedG, quantity: 'mass' },
+    { key: 'mto', label: `Share of a metal turnover (${process.tank.volumeL} L at ${tank.nickelMakeUpGPerL} g/L)`, value: lot.metalTurnovers, unit: 'MTO', digits: 4 },
+    { key: 'bathLife', label: `Bath life cost per turnover (end of life at ${tank.endOfLifeMto} MTO)`, value: costPerMtoCents / 100, unit: '$ per MTO', digits: 2 },
+    {
+      key: 'loading', label: 'Bath loading per load', value: loadingDm2PerL, unit: 'dm²/L', digits: 3,
+      ...(loadingDm2PerL > MAX_LOADING_DM2_PER_L ? { warning: `Above about ${MAX_LOADING_DM2_PER_L} dm²/L the bath runs unstable: use smaller loads.` } : {}),
+    },
+  ];
+  const cautions = ['Phosphorus above about 11 % makes the deposit non-magnetic: measure thickness by X-ray or coulometric methods, not a magnetic gauge (ASTM B733 scope).'];
+  if (params.densityGPerCm3 === undefined) cautions.push('The deposit density comes from a phosphorus table recalled from memory; enter the bath’s measured density when known.');
+  const components = [
+    costComponent('metal', 'Nickel taken from the bath', lot.nickelConsumedG / 1000, 'kg', nickelPrice),
+    costComponent('bathLife', 'Bath life (make-up and disposal per metal turnover)', lot.metalTurnovers, 'MTO', costPerMtoCents),
+    ...commonComponents(input, { loads, tankHours }, bake),
+  ];
+  return assembleLinePrice(input, {
+    components,
+    bake,
+    cautions,
+    family: 'electroless_nickel',
+    figures,
+    job: {
+      loads, partsPerLoad, loadLimitedBy: 'capacity', averageThicknessUm: targetUm, minimumThicknessUm: finish.minThicknessUm, distributionRatio: finish.distributionRatio,
+      ampHours: 0, minutesPerLoad: lot.minutes, tankHours, labourHours: (loads * finish.handlingMinutesPerLoad) / 60, metalKg: lot.nickelConsumedG / 1000, acKWh: 0,
+      areaPerLotDm2: part.areaDm2 * input.quantity,
+    },
+  });
+}
+
+/** ASTM B733 types by phosphorus (from memory: II 1–3 %, III 2–4 %, IV 5–9 %, V ≥ 10 %). */
+export function b733TypeFor(phosphorusWtPct: number): string | null {
+  if (phosphorusWtPct >= 10) return 'V';
+  if (phosphorusWtPct >= 5 && phosphorusWtPct <= 9) return 'IV';
+  if (phosphorusWtPct >= 2 && phosphorusWtPct <= 4) return 'III';
+  if (phosphorusWtPct >= 1 && phosphorusWtPct <= 3) return 'II';
+  return null;
+}
+
+export const electrolessNickel: ProcessFamily<ElectrolessParams> = {
+  id: 'electroless_nickel',
+  label: 'Electroless nickel',
+  metal: { element: 'Ni', charge: 2, label: 'Nickel–phosphorus' },
+  usesCurrentDensity: false,
+  bakeLabel: 'Heat treatment (hardness or embrittlement relief, ASTM B733 classes)',
+  usesEfficiency: false,
+  form: [
+    { name: 'depositionRateUmPerH', label: 'Deposition rate', kind: 'number', convert: 'thicknessPerHour', hint: 'The bath’s measured rate, per hour.' },
+    { name: 'phosphorusWtPct', label: 'Phosphorus in the deposit', kind: 'number', unit: '% by weight' },
+    { name: 'densityGPerCm3', label: 'Deposit density', kind: 'number', unit: 'g/cm³', optional: true, hint: 'Leave empty to take it from the phosphorus content.' },
+  ],
+  summary: 'Autocatalytic nickel–phosphorus: thickness from the bath’s rate and time, no current.',
+  paramsSchema,
+  defaultParams: { depositionRateUmPerH: 15, phosphorusWtPct: 8 },
+  templates: EN_TEMPLATES,
+  methods: EN_METHODS,
+  hazards: ['nickel', 'heat'],
+  runsWithCurrent: false,
+  runConditions: ['temperatureC'],
+  // Thickness is the bath's rate × time in it.
+  predictRun: (input, params) => {
+    const area = runArea(input);
+    if (!(input.minutesPerLoad > 0)) throw new PlatingInputError('minutesPerLoad', 'Minutes per load must be a number greater than 0.');
+    return thicknessVerdict(input, area, (params.depositionRateUmPerH * input.minutesPerLoad) / 60);
+  },
+  tankServes: (tank) => EN_TEMPLATES.some((t) => t.id === tank.templateId),
+  price,
+  quality: [
+    { kind: 'thickness', label: 'Deposit thickness (X-ray fluorescence ASTM B568, or microscopy ASTM B487)' },
+    {
+      kind: 'phosphorus_content',
+      label: 'Phosphorus content of the deposit',
+      methods: [
+        { id: 'xrf', label: 'X-ray fluorescence' },
+        { id: 'icp', label: 'Wet chemistry / ICP on a stripped deposit' },
+        { id: 'edx', label: 'Energy-dispersive X-ray (EDX)' },
+      ],
+    },
+    { kind: 'bake', label: 'Heat treatment for hardness or embrittlement relief, where the specification asks' },
+  ],
+  certificateStatement: (finish, p) => {
+    const type = b733TypeFor(p.phosphorusWtPct);
+    return `Autocatalytic (electroless) nickel–phosphorus, ${p.phosphorusWtPct} % phosphorus nominal${type ? ` (ASTM B733 Type ${type})` : ''}${finish.specText ? `, to ${finish.specText}` : ''}.`;
+  },
+};

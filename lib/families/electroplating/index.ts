@@ -1,0 +1,66 @@
+// Electroplating: metal deposited by current, by Faraday's law (lib/plating's job estimate). Zinc
+// finishes also show the coating's expected life where the customer states the environment.
+import { z } from 'zod';
+import { predictRun } from '@/lib/orders/run-math';
+import { describeZincLife, PlatingInputError, ZINC_LIFE_STANDARD, zincServiceLife, zincThicknessForLife, type CorrosivityCategory } from '@/lib/plating';
+import { priceLine, type FamilyFigure, type PricingInput } from '@/lib/quotes/pricing';
+import { NICKEL_COPPER_TEMPLATES } from '@/lib/bath/templates-nickel-copper';
+import { OTHER_TEMPLATES } from '@/lib/bath/templates-other';
+import { ZINC_TIN_TEMPLATES } from '@/lib/bath/templates-zinc-tin';
+import type { ProcessFamily } from '../types';
+
+const paramsSchema = z.object({});
+export type ElectroplatingParams = z.infer<typeof paramsSchema>;
+
+export const LIFE_DISCLAIMER = 'An estimate, not a warranty: the site’s measured corrosivity category governs.';
+
+/** Zinc life in the stated environment, and the thickness a stated design life needs. */
+export function zincLifeFigures(minThicknessUm: number, category: CorrosivityCategory | null | undefined, designLifeYears: number | null | undefined): FamilyFigure[] {
+  if (!category) return [];
+  const life = zincServiceLife({ thicknessUm: minThicknessUm, category });
+  const figures: FamilyFigure[] = [{ key: 'zincLife', label: `Expected life in ${category} (${ZINC_LIFE_STANDARD}; ${LIFE_DISCLAIMER})`, value: describeZincLife(life, category) }];
+  if (designLifeYears) {
+    const needed = zincThicknessForLife({ years: designLifeYears, category }).thicknessUm;
+    figures.push({
+      key: 'zincForLife',
+      label: `Zinc for a ${designLifeYears}-year life in ${category} (upper rate)`,
+      value: needed,
+      quantity: 'thickness',
+      ...(needed > minThicknessUm ? { warning: 'More than the finish’s minimum thickness: quote a thicker coating or a shorter life.' } : {}),
+    });
+  }
+  return figures;
+}
+
+export const electroplating: ProcessFamily<ElectroplatingParams> = {
+  id: 'electroplating',
+  label: 'Electroplating',
+  metal: null,
+  usesCurrentDensity: true,
+  bakeLabel: 'Hydrogen-embrittlement relief bake',
+  usesEfficiency: true,
+  form: [],
+  summary: 'Metal deposited by current: amp-hours, time and metal from Faraday’s law.',
+  paramsSchema,
+  defaultParams: {},
+  templates: [...NICKEL_COPPER_TEMPLATES, ...ZINC_TIN_TEMPLATES, ...OTHER_TEMPLATES],
+  methods: [],
+  hazards: ['electrical'],
+  runsWithCurrent: true,
+  runConditions: [],
+  predictRun: (input) => {
+    if (input.ampHours === null) throw new PlatingInputError('currentA', 'A plating run needs its current or its amp-hours.');
+    if (input.tank.efficiency === null) throw new PlatingInputError('tankId', 'The tank has no cathode efficiency on record.');
+    const p = predictRun({ ...input.finish, ampHours: input.ampHours, loads: input.loads, partsPerLoad: input.partsPerLoad, areaPerPartDm2: input.areaPerPartDm2, tankEfficiency: input.tank.efficiency });
+    return { ...p, outsideWindow: [] };
+  },
+  // A plating tank deposits the finish's metal from the finish's ion.
+  tankServes: (tank, finish) => tank.element === finish.element && tank.ionCharge === finish.ionCharge,
+  price: (input: PricingInput) =>
+    priceLine(input, input.finish.element === 'Zn' ? zincLifeFigures(input.finish.minThicknessUm, input.part.corrosivityCategory, input.part.designLifeYears) : []),
+  quality: [
+    { kind: 'thickness', label: 'Coating thickness (the method the specification names)' },
+    { kind: 'bake', label: 'Embrittlement-relief bake, where the steel or the specification requires it' },
+  ],
+  certificateStatement: (finish) => `Electroplated: ${finish.name}${finish.specText ? `, to ${finish.specText}` : ''}.`,
+};
