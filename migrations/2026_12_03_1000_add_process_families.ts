@@ -19,6 +19,10 @@ export async function up(db: Kysely<any>): Promise<void> {
       add constraint finishes_family_efficiency check ((family = 'electroplating') = (efficiency is not null));
 
     alter table tanks add column family_settings jsonb not null default '{}'::jsonb;
+    -- A bath at the end of the life the shop set (an electroless bath's metal turnovers).
+    alter table bath_alerts drop constraint bath_alerts_kind_check;
+    alter table bath_alerts add constraint bath_alerts_kind_check
+      check (kind in ('out_of_limits', 'run_rule', 'overdue', 'addition_missing', 'end_of_life'));
     -- When the bath was last made up: an electroless bath's age (metal turnovers) counts from here.
     alter table tanks add column made_up_at timestamptz;
 

@@ -9,7 +9,9 @@ export type CautionKind =
   | 'hydrogen'
   | 'electrical'
   | 'high-strength-steel-bake'
-  | 'heat';
+  | 'heat'
+  | 'nickel'
+  | 'nitric-acid';
 
 export const SAFETY_DEFERRAL =
   "Follow the safety data sheet, the customer's specification, local codes and licensed practice.";
@@ -62,6 +64,18 @@ export const cautionTexts: Record<CautionKind, { title: string; text: string }> 
       'Steel of about 31 HRC (1000 MPa) and harder can crack from hydrogen taken up in plating. Bake as the ' +
       'specification requires, usually starting within 4 hours of plating and before any passivate or chromate. ' +
       'The bake lowers the risk; it does not remove it.',
+  },
+  nickel: {
+    title: 'Nickel salts',
+    text:
+      'Nickel compounds sensitise skin and lungs, and some cause cancer. Wear gloves, keep mist down, wash before ' +
+      'eating, and keep nickel solutions out of drains.',
+  },
+  'nitric-acid': {
+    title: 'Nitric acid',
+    text:
+      'Gives off brown nitrogen-oxide fumes and is a strong oxidiser: keep the tank under extraction, away from ' +
+      'solvents, oils and other organics, and never mix it with them.',
   },
   heat: {
     title: 'Hot solutions and surfaces',

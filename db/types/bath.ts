@@ -6,7 +6,7 @@ export type AnalysisVerdict = 'in_range' | 'near_limit' | 'out_of_range';
 export type AnalysisSource = 'floor' | 'office' | 'lab' | 'seed';
 export type AdditionKind = 'correction' | 'amp_hours' | 'make_up' | 'other';
 export type AdditionUnit = 'kg' | 'L';
-export type AlertKind = 'out_of_limits' | 'run_rule' | 'overdue' | 'addition_missing';
+export type AlertKind = 'out_of_limits' | 'run_rule' | 'overdue' | 'addition_missing' | 'end_of_life';
 export type AlertState = 'open' | 'acknowledged' | 'escalated';
 export type AlertEmailKind = 'raised' | 'escalated';
 

@@ -14,6 +14,7 @@ export const ALERT_KIND_LABEL: Record<AlertKind, string> = {
   run_rule: 'Control rule fired',
   overdue: 'Analysis overdue',
   addition_missing: 'Addition not recorded',
+  end_of_life: 'Bath at the end of its life',
 };
 
 export const ALERT_STATE_LABEL: Record<AlertState, string> = {

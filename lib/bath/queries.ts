@@ -1,4 +1,6 @@
 import 'server-only';
+import type { BathAge } from '@/lib/families/electroless-nickel/bath-age';
+import { findBathAges } from './bath-age';
 import { sql, type Kysely } from 'kysely';
 import { db as defaultDb } from '@/db';
 import type { AnalysisVerdict, Database, TankAnalyte } from '@/db/types';
@@ -58,6 +60,8 @@ export type TankSummary = {
   overdue: number;
   openAlerts: number;
   lastAnalysedAt: Date | null;
+  /** An electroless bath's age in metal turnovers; null for baths that have none. */
+  age: BathAge | null;
 };
 
 export async function findTankSummaries(executor: Db = defaultDb): Promise<TankSummary[]> {
@@ -69,7 +73,7 @@ export async function findTankSummaries(executor: Db = defaultDb): Promise<TankS
     .orderBy('l.name')
     .orderBy('t.code')
     .execute();
-  const [analytes, alerts] = await Promise.all([
+  const [analytes, alerts, ages] = await Promise.all([
     findAnalyteStatus(undefined, new Date(), executor),
     executor
       .selectFrom('bath_alerts')
@@ -77,6 +81,7 @@ export async function findTankSummaries(executor: Db = defaultDb): Promise<TankS
       .where('state', '<>', 'acknowledged')
       .groupBy('tank_id')
       .execute(),
+    findBathAges(null, executor),
   ]);
   const alertCount = new Map(alerts.map((a) => [a.tank_id, a.n]));
   return tanks.map((t) => {
@@ -96,6 +101,7 @@ export async function findTankSummaries(executor: Db = defaultDb): Promise<TankS
       overdue: mine.filter((a) => a.is_overdue).length,
       openAlerts: alertCount.get(t.id) ?? 0,
       lastAnalysedAt: last,
+      age: ages.get(t.id) ?? null,
     };
   });
 }

@@ -1,4 +1,5 @@
 import 'server-only';
+import { checkBathEndOfLife } from './bath-age';
 import type { Kysely } from 'kysely';
 import { db as defaultDb } from '@/db';
 import type { Addition, AdditionKind, Database, MeterReading } from '@/db/types';
@@ -86,7 +87,10 @@ export async function recordAddition(actor: BathActor, input: RecordAdditionInpu
       .onConflict((oc) => oc.column('idempotency_key').doNothing())
       .returningAll()
       .executeTakeFirst();
-    if (row) return { addition: row, duplicate: false };
+    if (row) {
+      await checkBathEndOfLife(executor, input.tankId);
+      return { addition: row, duplicate: false };
+    }
   } catch (e) {
     if (isUniqueViolation(e, 'additions_supersedes_id_key')) throw new AppError('CONFLICT', 'That addition has already been corrected: correct the newest entry instead.');
     throw e;

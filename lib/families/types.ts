@@ -4,6 +4,7 @@
 // in ./index.ts; the rest of the app asks the registry rather than testing the family by name.
 import type { z } from 'zod';
 import type { ProcessFamilyId } from '@/db/types';
+import type { CautionKind } from '@/components/ui/caution';
 import type { Hazard } from '@/lib/bath/hazards';
 import type { BathTemplate } from '@/lib/bath/template-types';
 import type { AnalysisMethod } from '@/lib/bath/titration';
@@ -27,7 +28,7 @@ export type FamilyFormField = {
   kind: 'number' | 'select';
   options?: readonly { value: string; label: string }[];
   /** Converted from the form's own unit: a thickness per hour, or a temperature. */
-  convert?: 'thicknessPerHour' | 'temperature';
+  convert?: 'thicknessPerHour' | 'temperature' | 'dollars';
   /** A fixed unit shown beside the box. */
   unit?: string;
   hint?: string;
@@ -67,6 +68,8 @@ export type ProcessFamily<P = Record<string, unknown>> = {
   usesCurrentDensity: boolean;
   usesEfficiency: boolean;
   form: readonly FamilyFormField[];
+  /** What a tank of this family keeps besides its chemistry (make-up nickel, end of life, a measured constant). */
+  tankSettings: { schema: z.ZodType<Record<string, unknown>>; fields: readonly FamilyFormField[] } | null;
   /** What the finish form calls the heat treatment after the process. */
   bakeLabel: string;
   /** One line on what the family does, for menus and the finish form. */
@@ -77,6 +80,8 @@ export type ProcessFamily<P = Record<string, unknown>> = {
   templates: readonly BathTemplate[];
   methods: readonly AnalysisMethod[];
   hazards: readonly Hazard[];
+  /** The cautions a screen about this finish shows (the seal or treatment can add some). */
+  cautions(params: P): CautionKind[];
   /** Whether a tank can run a finish of this family (its bath template, and the metal or treatment). */
   tankServes(tank: { templateId: string; element: string | null; ionCharge: number | null }, finish: { element: string; ionCharge: number; params: P }): boolean;
   /** Whether a run on this family passes current (amp-hours) or only time in the bath. */

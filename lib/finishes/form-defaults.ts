@@ -3,6 +3,7 @@ import { centsToDollarText, plainNumber } from '@/lib/records/fields';
 import { DISTRIBUTION_RATIO_DEFAULTS, displayUnit, fromStorage, type UnitSystem } from '@/lib/plating';
 import type { ProcessFamilyId } from '@/db/types';
 import { FAMILIES } from '@/lib/families';
+import { familyFieldText } from '@/lib/families/form';
 import { routeToText, type RouteStep } from './hazards';
 
 type Saved = {
@@ -34,24 +35,16 @@ type Saved = {
   family_params: Record<string, unknown>;
 };
 
-/** Each family's own fields as fp_<name>, in the user's units (thickness per hour, temperature). */
+/** Each family's own fields as fp_<name>, in the user's units; other families' fields keep their defaults. */
 function familyFieldDefaults(family: ProcessFamilyId, params: Record<string, unknown>, system: UnitSystem): Record<string, string> {
   const out: Record<string, string> = {};
-  for (const fam of FAMILIES) {
+  for (const fam of [...FAMILIES.filter((f) => f.id !== family), ...FAMILIES.filter((f) => f.id === family)]) {
     const defaults = fam.defaultParams as Record<string, unknown>;
     const values = fam.id === family ? { ...defaults, ...params } : defaults;
-    for (const f of fam.form) {
-      const raw = (values as Record<string, unknown>)[f.name];
-      const key = `fp_${f.name}`;
-      if (out[key] !== undefined && fam.id !== family) continue;
-      if (typeof raw === 'number') {
-        out[key] = plainNumber(f.convert === 'thicknessPerHour' ? fromStorage(raw, displayUnit('thickness', system)) : f.convert === 'temperature' ? fromStorage(raw, displayUnit('temperature', system)) : raw);
-      } else out[key] = typeof raw === 'string' ? raw : '';
-    }
+    for (const f of fam.form) out[`fp_${f.name}`] = familyFieldText(f, values[f.name], system);
   }
   return out;
 }
-
 
 export function finishFormDefaults(f: Saved | null, system: UnitSystem): Record<string, string> {
   const thicknessUnit = displayUnit('thickness', system);

@@ -3,6 +3,8 @@
 // the route is read for the words a shop writes for those steps.
 import { findMetal } from '@/lib/plating';
 import type { CautionKind } from '@/components/ui/caution';
+import type { ProcessFamilyId } from '@/db/types';
+import { getFamily } from '@/lib/families';
 
 export type RouteStep = { step: string; note?: string };
 
@@ -11,8 +13,18 @@ const HEXAVALENT = /hexavalent|chromic acid|dichromate|\bcr\s*\(?vi\)?\b|yellow 
 // "free of hexavalent chromium", "trivalent", "non-hexavalent" describe the safer process.
 const NOT_HEXAVALENT = /\bfree\b|\bnon-?hex|trivalent|without|cr\s*\(?iii\)?/i;
 
-export function finishHazards(finish: { element: string; ionCharge: number; route: readonly RouteStep[]; bakeRequired: boolean }): CautionKind[] {
+export function finishHazards(finish: {
+  family?: ProcessFamilyId;
+  familyParams?: unknown;
+  element: string;
+  ionCharge: number;
+  route: readonly RouteStep[];
+  bakeRequired: boolean;
+}): CautionKind[] {
   const kinds = new Set<CautionKind>();
+  const family = getFamily(finish.family);
+  const params = family.paramsSchema.safeParse(finish.familyParams ?? family.defaultParams);
+  for (const k of family.cautions(params.success ? params.data : family.defaultParams)) kinds.add(k);
   const metal = findMetal(finish.element, finish.ionCharge);
   if (metal?.caution && CYANIDE.test(metal.caution)) kinds.add('cyanide');
   if (metal?.element === 'Cr' && metal.charge === 6) kinds.add('hexavalent-chromium');

@@ -6,6 +6,7 @@ import { PLATING_METALS, toStorage, unitsOf, type UnitOf } from '@/lib/plating';
 import { checkbox, numberField, optionalNumberField, optionalText, requiredText } from '@/lib/records/fields';
 import type { ProcessFamilyId } from '@/db/types';
 import { FAMILY_IDS, getFamily } from '@/lib/families';
+import { readFamilyFields } from '@/lib/families/form';
 import { routeFromText } from './hazards';
 
 const unitEnum = <Q extends 'thickness' | 'currentDensity' | 'temperature'>(q: Q, what: string) =>
@@ -14,22 +15,9 @@ const unitEnum = <Q extends 'thickness' | 'currentDensity' | 'temperature'>(q: Q
 const optionalUuid = z.preprocess((v) => (v === '' || v === undefined ? null : v), z.uuid({ error: 'Choose a line.' }).nullable());
 
 /** A family's own form fields (fp_<name>), converted to storage units and checked by its schema. */
-function familyParamsFrom(v: Record<string, unknown>, thicknessUnit: UnitOf<'thickness'>, temperatureUnit: UnitOf<'temperature'>) {
+function familyParamsFrom(v: Record<string, unknown>, thickness: UnitOf<'thickness'>, temperature: UnitOf<'temperature'>) {
   const family = getFamily(v.family as ProcessFamilyId);
-  const raw: Record<string, unknown> = {};
-  for (const f of family.form) {
-    const text = typeof v[`fp_${f.name}`] === 'string' ? (v[`fp_${f.name}`] as string).trim().replace(',', '.') : '';
-    if (text === '') {
-      if (!f.optional) raw[f.name] = undefined;
-      continue;
-    }
-    if (f.kind === 'select') raw[f.name] = text;
-    else {
-      const n = Number(text);
-      raw[f.name] = !Number.isFinite(n) ? text : f.convert === 'thicknessPerHour' ? toStorage(n, thicknessUnit) : f.convert === 'temperature' ? toStorage(n, temperatureUnit) : n;
-    }
-  }
-  return { family, parsed: family.paramsSchema.safeParse(raw) };
+  return { family, parsed: family.paramsSchema.safeParse(readFamilyFields(family.form, v, 'fp_', { thickness, temperature })) };
 }
 
 export const finishSchema = z

@@ -2,7 +2,10 @@
 // then kept as it is (the stored snapshot and PDF never change). Pure: the same lot and signer
 // give the same content, so it can be checked in tests and rendered anywhere.
 import { BAKE_CAUTION } from './bake';
-import { lotBake, lotSample, latestBake, thicknessState } from './lot-checks';
+import { LIFE_DISCLAIMER } from '@/lib/families/electroplating';
+import { describeZincLife, ZINC_LIFE_STANDARD, zincServiceLife } from '@/lib/plating';
+import { lotBake, lotFamily, lotSample, latestBake, runMinutesPerLoad, thicknessState } from './lot-checks';
+import { describeRecord, PROCESS_RECORD_LABELS } from './process-record-rules';
 import { DISPOSITION_LABELS, type LotRecord } from './lot-types';
 import { methodLabel } from './methods';
 
@@ -57,6 +60,17 @@ export type CertificateContent = {
         caution: string;
       };
   nonconformances: { description: string; disposition: string; customerApprovalRef: string | null; closedAt: string | null }[];
+  /** What was done in the trade's words, the family's own records, and the coating life where asked (absent on older certificates). */
+  process?: {
+    family: string;
+    statement: string;
+    /** Whether the family makes a coating whose thickness the certificate reports. */
+    reportsThickness: boolean;
+    records: { label: string; result: string; verdict: 'pass' | 'fail'; recordedAt: string }[];
+    /** Per-run bath conditions, for a family judged by a window (passivation). */
+    runConditions: string[];
+    life: { category: string; text: string; standard: string; note: string } | null;
+  };
   statement: string;
   signedBy: { name: string; role: string };
   signedAt: string;
@@ -70,6 +84,29 @@ export const CONFORMANCE_STATEMENT =
   'purchase order adds requirements, those requirements govern.';
 
 const iso = (d: Date) => d.toISOString();
+
+/** The family's section of the certificate: its statement, its records, the life estimate where asked. */
+function processSection(lot: LotRecord): NonNullable<CertificateContent['process']> {
+  const { family, params } = lotFamily(lot);
+  const windowRun = family.quality.some((q) => q.kind === 'passivation_lot');
+  const category = lot.part.corrosivityCategory;
+  // Zinc life by ISO 9223 category, from the measured minimum where there is one, else the specified minimum.
+  const zincUm = lot.readings.length ? Math.min(...lot.readings.map((r) => r.thicknessUm)) : lot.finish.minThicknessUm;
+  const life =
+    category && lot.finish.element === 'Zn' && family.id === 'electroplating'
+      ? { category, text: describeZincLife(zincServiceLife({ thicknessUm: zincUm, category }), category), standard: ZINC_LIFE_STANDARD, note: LIFE_DISCLAIMER }
+      : null;
+  return {
+    family: family.label,
+    statement: family.certificateStatement(lot.finish, params as never),
+    reportsThickness: family.quality.some((q) => q.kind === 'thickness'),
+    records: (lot.processRecords ?? []).map((r) => ({ label: PROCESS_RECORD_LABELS[r.kind], result: describeRecord(r), verdict: r.verdict, recordedAt: iso(r.recordedAt) })),
+    runConditions: windowRun
+      ? lot.runs.map((r) => `${r.tankCode}, ${iso(r.endedAt).slice(0, 10)}: ${Math.round(runMinutesPerLoad(r))} min at ${r.conditions.temperatureC ?? '—'} °C, acid ${r.conditions.concentration ?? '—'} %`)
+      : [],
+    life,
+  };
+}
 
 export function buildCertificateContent(
   lot: LotRecord,
@@ -142,6 +179,7 @@ export function buildCertificateContent(
       customerApprovalRef: n.customerApprovalRef,
       closedAt: n.closedAt ? iso(n.closedAt) : null,
     })),
+    process: processSection(lot),
     statement: CONFORMANCE_STATEMENT,
     signedBy: opts.signer,
     signedAt: iso(opts.signedAt),

@@ -66,6 +66,27 @@ export function CertificateDocument({ k, c }: { k: Kit; c: CertificateContent })
             <Fact k={k} label="Specification" value={c.finish.specText} />
           </View>
 
+          {c.process ? (
+            <View style={pdfStyles.section} wrap={false}>
+              <Text style={pdfStyles.h2}>Process: {c.process.family}</Text>
+              <Text>{c.process.statement}</Text>
+              {c.process.runConditions.map((r, i) => (
+                <Text key={`run-${i}`}>{r}</Text>
+              ))}
+              {c.process.records.map((r, i) => (
+                <Text key={`rec-${i}`}>
+                  {r.label}: {r.result} ({r.verdict === 'pass' ? 'conforms' : 'does not conform'}, {at(r.recordedAt)}).
+                </Text>
+              ))}
+              {c.process.life ? (
+                <Text>
+                  Estimated coating life in corrosivity category {c.process.life.category}: {c.process.life.text} ({c.process.life.standard}). {c.process.life.note}
+                </Text>
+              ) : null}
+            </View>
+          ) : null}
+
+          {c.process?.reportsThickness === false ? null : (
           <View style={pdfStyles.section}>
             <Text style={pdfStyles.h2}>Coating thickness</Text>
             <Text>Requirement: {limits}.</Text>
@@ -83,6 +104,7 @@ export function CertificateDocument({ k, c }: { k: Kit; c: CertificateContent })
             </View>
             <ReadingsTable k={k} readings={t.readings} />
           </View>
+          )}
 
           <BakeSection k={k} c={c} at={at} />
           <BathSection k={k} c={c} at={at} />

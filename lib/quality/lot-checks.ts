@@ -3,11 +3,25 @@
 // Pure. The work-order guards and the certificate both ask these questions, so each refusal
 // reads the same wherever it appears.
 import { lotBakeRequirement, type LotBakeRequirement } from './bake-rules';
-import type { LotBake, LotRecord, LotReading } from './lot-types';
+import type { ProcessRecordKind } from '@/db/types';
+import { getFamily } from '@/lib/families';
+import { checkPassivation } from '@/lib/plating';
+import type { LotBake, LotProcessRecord, LotRecord, LotReading } from './lot-types';
+import { describeRecord, PROCESS_RECORD_LABELS } from './process-record-rules';
 import { sampleSizeFor, Z14_LEVEL_II, type SampleSize } from './sampling';
 import { summarize, type ReadingSummary } from './stats';
 
-export type CheckKey = 'runs' | 'thickness_count' | 'thickness_pass' | 'bake' | 'nonconformance';
+export type CheckKey =
+  | 'runs'
+  | 'thickness_count'
+  | 'thickness_pass'
+  | 'bake'
+  | 'nonconformance'
+  | 'seal_test'
+  | 'phosphorus_content'
+  | 'passivation_lot'
+  | 'passivation_test'
+  | 'salt_spray';
 export type LotCheck = { key: CheckKey; ok: boolean; message: string };
 
 export const MESSAGES = {
@@ -136,8 +150,79 @@ export function runsCheck(lot: LotRecord): LotCheck {
   return lot.runs.length ? { key: 'runs', ok: true, message: `${lot.runs.length} plating run${lot.runs.length === 1 ? '' : 's'} recorded.` } : { key: 'runs', ok: false, message: MESSAGES.noRuns };
 }
 
+/** The lot's family and its own figures (a lot loaded before families is electroplating). */
+export function lotFamily(lot: LotRecord) {
+  const family = getFamily(lot.finish.family);
+  const parsed = family.paramsSchema.safeParse(lot.finish.familyParams ?? family.defaultParams);
+  return { family, params: parsed.success ? parsed.data : family.defaultParams };
+}
+
+function latestRecord(lot: LotRecord, kind: ProcessRecordKind): LotProcessRecord | null {
+  const rs = (lot.processRecords ?? []).filter((r) => r.kind === kind);
+  return rs.length ? rs.reduce((a, b) => (b.recordedAt >= a.recordedAt ? b : a)) : null;
+}
+
+/** A family record the lot needs: missing, failing, or passing with what it showed. */
+export function recordCheck(lot: LotRecord, kind: Exclude<ProcessRecordKind, 'passivation_lot'>): LotCheck {
+  const label = PROCESS_RECORD_LABELS[kind];
+  const last = latestRecord(lot, kind);
+  if (!last) return { key: kind, ok: false, message: `The ${label.toLowerCase()} has not been recorded.` };
+  if (last.verdict === 'fail') return { key: kind, ok: false, message: `The latest ${label.toLowerCase()} fails: ${last.reasons.join(' ')}` };
+  return { key: kind, ok: true, message: `${label} passes: ${describeRecord(last)}.` };
+}
+
+/** Minutes a run spent in the bath per load, from its start, end and loads. */
+export function runMinutesPerLoad(r: { startedAt: Date; endedAt: Date; loads: number }): number {
+  return (r.endedAt.getTime() - r.startedAt.getTime()) / 60_000 / Math.max(1, r.loads);
+}
+
+/**
+ * ASTM A967 §5.2.2: the lot's time, temperature and concentration, run by run, inside the window.
+ * A run outside it has opened a nonconformance; only the customer's "use as is" lets it pass.
+ */
+export function passivationLotCheck(lot: LotRecord, windowId: string): LotCheck {
+  if (lot.runs.length === 0) return { key: 'passivation_lot', ok: false, message: 'No passivation run with its conditions is recorded.' };
+  const missing = lot.runs.filter((r) => r.conditions.temperatureC === undefined || r.conditions.concentration === undefined);
+  if (missing.length) return { key: 'passivation_lot', ok: false, message: `${missing.length} run${missing.length === 1 ? ' has' : 's have'} no bath temperature or concentration recorded.` };
+  const accepted = lot.nonconformances.some((nc) => nc.disposition === 'use_as_is');
+  const outside = lot.runs
+    .map((r) => checkPassivation({ windowId, temperatureC: r.conditions.temperatureC!, minutes: runMinutesPerLoad(r), concentration: r.conditions.concentration! }))
+    .filter((v) => !v.ok);
+  if (outside.length && !accepted) {
+    return { key: 'passivation_lot', ok: false, message: `${outside.length} run${outside.length === 1 ? ' was' : 's were'} outside the treatment's window: a nonconformance needs the customer's disposition.` };
+  }
+  const w = outside[0]?.window ?? checkPassivation({ windowId, temperatureC: lot.runs[0]!.conditions.temperatureC!, minutes: runMinutesPerLoad(lot.runs[0]!), concentration: lot.runs[0]!.conditions.concentration! }).window;
+  return {
+    key: 'passivation_lot',
+    ok: true,
+    message: outside.length
+      ? `Runs outside ${w.standard} ${w.treatment} were accepted by the customer's "use as is".`
+      : `Every run sat inside ${w.standard} ${w.treatment}: ${lot.runs.map((r) => `${Math.round(runMinutesPerLoad(r))} min at ${r.conditions.temperatureC} °C, ${r.conditions.concentration} %`).join('; ')}.`,
+  };
+}
+
+/** What inspection asks of the lot, by its family: thickness, the family's records, no open nonconformance. */
+export function inspectionChecks(lot: LotRecord): LotCheck[] {
+  const { family, params } = lotFamily(lot);
+  const checks: LotCheck[] = [];
+  for (const q of family.quality) {
+    if (q.kind === 'thickness') {
+      const t = thicknessState(lot);
+      checks.push(t.count, t.pass);
+    } else if (q.kind === 'passivation_lot') {
+      checks.push(passivationLotCheck(lot, String(params.windowId)));
+    } else if (q.kind === 'salt_spray') {
+      if (typeof params.saltSprayHours === 'number') checks.push(recordCheck(lot, 'salt_spray'));
+    } else if (q.kind !== 'bake') {
+      checks.push(recordCheck(lot, q.kind));
+    }
+  }
+  checks.push(nonconformanceCheck(lot));
+  return checks;
+}
+
 /** Every check, in the order a certificate asks them. */
 export function lotChecks(lot: LotRecord): LotCheck[] {
-  const t = thicknessState(lot);
-  return [runsCheck(lot), t.count, t.pass, bakeCheck(lot), nonconformanceCheck(lot)];
+  const inspection = inspectionChecks(lot);
+  return [runsCheck(lot), ...inspection.slice(0, -1), bakeCheck(lot), inspection.at(-1)!];
 }

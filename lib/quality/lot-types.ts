@@ -1,6 +1,6 @@
 // One lot's quality record as the pure rules see it: plain values, dates as Date, no database.
 import type { Disposition, NonconformanceSource, ReadingStatusColumn, StoredBakeReason, ThicknessMethod } from '@/db/types/quality';
-import type { WorkOrderState } from '@/db/types';
+import type { ProcessFamilyId, ProcessRecordKind, WorkOrderState } from '@/db/types';
 import type { SamplingRow } from './sampling';
 
 export type LotOrder = {
@@ -25,9 +25,14 @@ export type LotPart = {
   tensileMpa: number | null;
   hardnessHrc: number | null;
   areaDm2: number;
+  /** The service environment the customer stated (ISO 9223), where given. */
+  corrosivityCategory?: 'C1' | 'C2' | 'C3' | 'C4' | 'C5' | 'CX' | null;
 };
 
 export type LotFinish = {
+  /** The finish's process family and its own figures (absent in lots built before families: electroplating). */
+  family?: ProcessFamilyId;
+  familyParams?: Record<string, unknown>;
   code: string;
   name: string;
   specText: string;
@@ -116,7 +121,21 @@ export type LotSamplingPlan = { id: string | null; name: string; source: string;
 
 export type LotCertificate = { id: string; number: string; signedAt: Date; signedByName: string };
 
+/** A family's own lot record (seal test, phosphorus, passivation verification, salt spray). */
+export type LotProcessRecord = {
+  id: string;
+  kind: ProcessRecordKind;
+  method: string;
+  values: Record<string, number | string>;
+  verdict: 'pass' | 'fail';
+  reasons: string[];
+  notes: string;
+  recordedAt: Date;
+  recordedByName: string | null;
+};
+
 export type LotRecord = {
+  processRecords?: LotProcessRecord[];
   order: LotOrder;
   part: LotPart;
   finish: LotFinish;

@@ -40,7 +40,8 @@ export async function loadLot(db: Db, workOrderId: string): Promise<LotRecord | 
     .select([
       'w.id', 'w.number', 'w.state', 'w.po_number', 'w.quantity_ordered', 'w.quantity_received', 'w.quantity_shipped', 'w.bake_required',
       'w.customer_id', 'c.name as customer_name', 'c.code as customer_code',
-      'p.part_number', 'p.revision', 'p.description', 'p.substrate', 'p.tensile_mpa', 'p.hardness_hrc', 'p.area_dm2',
+      'p.part_number', 'p.revision', 'p.description', 'p.substrate', 'p.tensile_mpa', 'p.hardness_hrc', 'p.area_dm2', 'p.corrosivity_category',
+      'f.family', 'f.family_params',
       'f.code as finish_code', 'f.name as finish_name', 'f.spec_text', 'f.element', 'f.ion_charge', 'f.min_thickness_um', 'f.max_thickness_um',
       'f.bake_required as finish_bake_required', 'f.bake_threshold_hrc', 'f.bake_window_hours', 'f.bake_temp_c', 'f.bake_hours',
     ])
@@ -48,7 +49,7 @@ export async function loadLot(db: Db, workOrderId: string): Promise<LotRecord | 
     .executeTakeFirst();
   if (!o) return null;
 
-  const [runs, readings, voided, bakes, ncs, samplingPlan, cert] = await Promise.all([
+  const [runs, readings, voided, bakes, ncs, samplingPlan, cert, records] = await Promise.all([
     db
       .selectFrom('plating_runs as r')
       .innerJoin('tanks as t', 't.id', 'r.tank_id')
@@ -87,6 +88,14 @@ export async function loadLot(db: Db, workOrderId: string): Promise<LotRecord | 
       .execute(),
     getActiveSamplingPlan(db),
     db.selectFrom('certificates').select(['id', 'number', 'signed_at', 'signed_by_name']).where('work_order_id', '=', workOrderId).executeTakeFirst(),
+    db
+      .selectFrom('process_records as pr')
+      .select(['pr.id', 'pr.kind', 'pr.method', 'pr.values', 'pr.verdict', 'pr.reasons', 'pr.notes', 'pr.recorded_at'])
+      .select((eb) => userName(eb as never, 'pr.recorded_by').as('recorded_by_name'))
+      .where('pr.work_order_id', '=', workOrderId)
+      .where('pr.voided_at', 'is', null)
+      .orderBy('pr.recorded_at')
+      .execute(),
   ]);
 
   return {
@@ -96,9 +105,10 @@ export async function loadLot(db: Db, workOrderId: string): Promise<LotRecord | 
     },
     part: {
       partNumber: o.part_number, revision: o.revision, description: o.description, substrate: o.substrate,
-      tensileMpa: o.tensile_mpa, hardnessHrc: o.hardness_hrc, areaDm2: o.area_dm2,
+      tensileMpa: o.tensile_mpa, hardnessHrc: o.hardness_hrc, areaDm2: o.area_dm2, corrosivityCategory: o.corrosivity_category,
     },
     finish: {
+      family: o.family, familyParams: o.family_params,
       code: o.finish_code, name: o.finish_name, specText: o.spec_text, element: o.element, ionCharge: o.ion_charge,
       minThicknessUm: o.min_thickness_um, maxThicknessUm: o.max_thickness_um, bakeRequired: o.finish_bake_required,
       bakeThresholdHrc: o.bake_threshold_hrc, bakeWindowHours: o.bake_window_hours, bakeTempC: o.bake_temp_c, bakeHours: o.bake_hours,
@@ -125,6 +135,10 @@ export async function loadLot(db: Db, workOrderId: string): Promise<LotRecord | 
       dispositionedAt: n.dispositioned_at, dispositionedByName: n.dispositioned_by_name ?? null, closedAt: n.closed_at,
     })),
     samplingPlan,
+    processRecords: records.map((r) => ({
+      id: r.id, kind: r.kind, method: r.method, values: r.values, verdict: r.verdict, reasons: r.reasons, notes: r.notes, recordedAt: r.recorded_at,
+      recordedByName: r.recorded_by_name ?? null,
+    })),
     certificate: cert ? { id: cert.id, number: cert.number, signedAt: cert.signed_at, signedByName: cert.signed_by_name } : null,
   };
 }

@@ -133,6 +133,7 @@ export type FamilyFigure = {
   quantity?: 'thickness' | 'area' | 'currentDensity' | 'temperature' | 'volume' | 'mass';
   /** A unit shown as it is (min, A, A·h, %, MTO …). */
   unit?: string;
+  /** Decimal places for a counted unit; a quantity follows the unit module's own precision. */
   digits?: number;
   /** A plain-words warning when the figure crosses a limit. */
   warning?: string;

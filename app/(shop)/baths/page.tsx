@@ -48,6 +48,11 @@ export default async function BathsBoardPage() {
                       <VerdictBadge verdict={t.worst} />
                     </span>
                     <span className="text-xs text-ink-muted">{t.templateName}</span>
+                    {t.age ? (
+                      <span className={`text-sm ${t.age.atEndOfLife ? 'font-semibold text-out' : 'text-ink'}`}>
+                        {t.age.atEndOfLife ? '▲ ' : ''}Bath age: {t.age.text}
+                      </span>
+                    ) : null}
                     <span className="flex flex-wrap gap-2">
                       {t.openAlerts > 0 ? <Badge tone="copper">{t.openAlerts} open alert{t.openAlerts === 1 ? '' : 's'}</Badge> : null}
                       {t.overdue > 0 ? <Badge tone="outline">{t.overdue} {t.overdue === 1 ? 'analysis' : 'analyses'} due</Badge> : null}

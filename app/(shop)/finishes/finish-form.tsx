@@ -28,8 +28,8 @@ export function FinishForm({ defaults, lines, readOnly, units }: Props) {
   const [bake, setBake] = useState(defaults.bakeRequired === 'on');
   const m = family.metal ?? PLATING_METALS.find((x) => x.key === metal);
   const hazards = m ? finishHazards({ element: m.element, ionCharge: m.charge, route: routeFromText(route), bakeRequired: bake }) : [];
-  const fieldUnit = (convert: 'thicknessPerHour' | 'temperature' | undefined, unit: string | undefined) =>
-    convert === 'thicknessPerHour' ? `${UNITS[displayUnit('thickness', units)].symbol}/h` : convert === 'temperature' ? UNITS[displayUnit('temperature', units)].symbol : unit;
+  const fieldUnit = (convert: 'thicknessPerHour' | 'temperature' | 'dollars' | undefined, unit: string | undefined) =>
+    convert === 'dollars' ? '$' : convert === 'thicknessPerHour' ? `${UNITS[displayUnit('thickness', units)].symbol}/h` : convert === 'temperature' ? UNITS[displayUnit('temperature', units)].symbol : unit;
   const check = (name: string, label: string, checked?: boolean, onChange?: (on: boolean) => void) => (
     <label className="flex items-center gap-2 text-sm">
       <input type="checkbox" name={name} className="size-4" {...(onChange ? { checked, onChange: (ev) => onChange(ev.target.checked) } : { defaultChecked: v(name) === 'on' })} />

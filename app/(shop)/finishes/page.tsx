@@ -8,6 +8,7 @@ import { EmptyState } from '@/components/ui/empty-state';
 import { PageHeader } from '@/components/ui/page-header';
 import { SimpleTable } from '@/components/ui/simple-table';
 import { can, requirePageUser } from '@/lib/auth/current-user';
+import { getFamily } from '@/lib/families';
 import { finishHazards } from '@/lib/finishes/hazards';
 import { findFinishes } from '@/lib/finishes/queries';
 import { findMetal, formatStoredQuantity } from '@/lib/plating';
@@ -54,13 +55,13 @@ export default async function FinishesPage() {
                 </>
               ),
             },
-            { header: 'Metal', cell: (f) => findMetal(f.element, f.ion_charge)?.ion ?? f.element },
+            { header: 'Process', cell: (f) => { const fam = getFamily(f.family); return fam.metal ? fam.label : `${fam.label}: ${findMetal(f.element, f.ion_charge)?.ion ?? f.element}`; } },
             { header: 'Minimum', numeric: true, cell: (f) => formatStoredQuantity(f.min_thickness_um, 'thickness', user.unitSystem) },
             { header: 'Method', cell: (f) => f.method },
             {
               header: 'Cautions',
               cell: (f) =>
-                finishHazards({ element: f.element, ionCharge: f.ion_charge, route: f.process_route, bakeRequired: f.bake_required }).map((k) => (
+                finishHazards({ family: f.family, familyParams: f.family_params, element: f.element, ionCharge: f.ion_charge, route: f.process_route, bakeRequired: f.bake_required }).map((k) => (
                   <Badge key={k} tone="copper" className="mr-1">
                     {cautionTexts[k].title}
                   </Badge>

@@ -104,6 +104,10 @@ export const anodizing: ProcessFamily<AnodizeParams> = {
   usesCurrentDensity: true,
   bakeLabel: 'Heat treatment (rarely needed after anodizing)',
   usesEfficiency: false,
+  tankSettings: {
+    schema: z.object({ constantAminPerDm2PerUm: z.coerce.number().positive('The constant must be above 0.').max(100, 'Give it in A·min/dm² per µm (about 3).').optional() }),
+    fields: [{ name: 'constantAminPerDm2PerUm', label: 'Measured anodizing constant', kind: 'number', unit: 'A·min/dm² per µm', optional: true, hint: 'From this tank’s own coatings; empty uses the 720 rule (3.0512).' }],
+  },
   form: [
     { name: 'coatingType', label: 'Coating', kind: 'select', options: [{ value: 'II', label: 'Type II (sulfuric)' }, { value: 'III', label: 'Type III (hard)' }] },
     { name: 'growthFraction', label: 'Share that grows outward', kind: 'number', hint: 'Hard coatings about 0.5, Type II about 0.33 (common practice).' },
@@ -117,6 +121,8 @@ export const anodizing: ProcessFamily<AnodizeParams> = {
   templates: ANODIZE_TEMPLATES,
   methods: ANODIZE_METHODS,
   hazards: ['strong_acid', 'heat', 'nickel', 'electrical'],
+  // Sulfuric acid, a near-boiling seal; a nickel acetate seal is a nickel salt, a dichromate seal Cr(VI).
+  cautions: (p) => ['acid', 'electrical', ...(p.seal === 'none' ? [] : ['heat' as const]), ...(p.seal === 'nickel_acetate' ? ['nickel' as const] : []), ...(p.seal === 'dichromate' ? ['hexavalent-chromium' as const] : [])],
   runsWithCurrent: true,
   runConditions: [],
   // The charge per area over the constant: µm = A·min/dm² ÷ (A·min/dm² per µm).

@@ -100,6 +100,16 @@ function price(input: PricingInput, params: ElectrolessParams) {
   });
 }
 
+/** The phosphorus a lot may show: the B733 type's band for the nominal content, else ±1 % (from memory). */
+export function phosphorusRangeFor(nominalPct: number): { min: number; max: number } {
+  const type = b733TypeFor(nominalPct);
+  if (type === 'IV') return { min: 5, max: 9 };
+  if (type === 'V') return { min: 10, max: 14 };
+  if (type === 'III') return { min: 2, max: 4 };
+  if (type === 'II') return { min: 1, max: 3 };
+  return { min: Math.max(0, nominalPct - 1), max: Math.min(15, nominalPct + 1) };
+}
+
 /** ASTM B733 types by phosphorus (from memory: II 1–3 %, III 2–4 %, IV 5–9 %, V ≥ 10 %). */
 export function b733TypeFor(phosphorusWtPct: number): string | null {
   if (phosphorusWtPct >= 10) return 'V';
@@ -116,6 +126,15 @@ export const electrolessNickel: ProcessFamily<ElectrolessParams> = {
   usesCurrentDensity: false,
   bakeLabel: 'Heat treatment (hardness or embrittlement relief, ASTM B733 classes)',
   usesEfficiency: false,
+  tankSettings: {
+    schema: enTankSettingsSchema,
+    fields: [
+      { name: 'nickelMakeUpGPerL', label: 'Nickel at make-up', kind: 'number', unit: 'g/L', hint: 'One metal turnover is this nickel replaced once.' },
+      { name: 'endOfLifeMto', label: 'End of life', kind: 'number', unit: 'metal turnovers', hint: 'An alert is raised when the bath reaches it (typically 6–10, common practice).' },
+      { name: 'makeUpCostCents', label: 'Make-up cost of the bath', kind: 'number', convert: 'dollars', unit: '$' },
+      { name: 'disposalCostCents', label: 'Disposal cost of the spent bath', kind: 'number', convert: 'dollars', unit: '$' },
+    ],
+  },
   form: [
     { name: 'depositionRateUmPerH', label: 'Deposition rate', kind: 'number', convert: 'thicknessPerHour', hint: 'The bath’s measured rate, per hour.' },
     { name: 'phosphorusWtPct', label: 'Phosphorus in the deposit', kind: 'number', unit: '% by weight' },
@@ -127,6 +146,7 @@ export const electrolessNickel: ProcessFamily<ElectrolessParams> = {
   templates: EN_TEMPLATES,
   methods: EN_METHODS,
   hazards: ['nickel', 'heat'],
+  cautions: () => ['nickel', 'heat'],
   runsWithCurrent: false,
   runConditions: ['temperatureC'],
   // Thickness is the bath's rate × time in it.

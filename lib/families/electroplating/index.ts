@@ -9,7 +9,10 @@ import { OTHER_TEMPLATES } from '@/lib/bath/templates-other';
 import { ZINC_TIN_TEMPLATES } from '@/lib/bath/templates-zinc-tin';
 import type { ProcessFamily } from '../types';
 
-const paramsSchema = z.object({});
+const paramsSchema = z.object({
+  // Hours of ASTM B117 neutral salt spray the customer asks of a zinc finish with its conversion coating.
+  saltSprayHours: z.coerce.number().positive('Enter hours above 0.').max(5000, 'At most 5000 h.').optional(),
+});
 export type ElectroplatingParams = z.infer<typeof paramsSchema>;
 
 export const LIFE_DISCLAIMER = 'An estimate, not a warranty: the site’s measured corrosivity category governs.';
@@ -39,13 +42,16 @@ export const electroplating: ProcessFamily<ElectroplatingParams> = {
   usesCurrentDensity: true,
   bakeLabel: 'Hydrogen-embrittlement relief bake',
   usesEfficiency: true,
-  form: [],
+  tankSettings: null,
+  form: [{ name: 'saltSprayHours', label: 'Salt-spray hours the customer asks (ASTM B117)', kind: 'number', unit: 'h', optional: true, hint: 'Zinc with a conversion coating: leave empty if no salt-spray test is asked.' }],
   summary: 'Metal deposited by current: amp-hours, time and metal from Faraday’s law.',
   paramsSchema,
   defaultParams: {},
   templates: [...NICKEL_COPPER_TEMPLATES, ...ZINC_TIN_TEMPLATES, ...OTHER_TEMPLATES],
   methods: [],
   hazards: ['electrical'],
+  // The metal and the route decide the rest (lib/finishes/hazards).
+  cautions: () => ['electrical'],
   runsWithCurrent: true,
   runConditions: [],
   predictRun: (input) => {
@@ -61,6 +67,7 @@ export const electroplating: ProcessFamily<ElectroplatingParams> = {
   quality: [
     { kind: 'thickness', label: 'Coating thickness (the method the specification names)' },
     { kind: 'bake', label: 'Embrittlement-relief bake, where the steel or the specification requires it' },
+    { kind: 'salt_spray', label: 'Neutral salt spray (ASTM B117), where the finish asks for hours' },
   ],
   certificateStatement: (finish) => `Electroplated: ${finish.name}${finish.specText ? `, to ${finish.specText}` : ''}.`,
 };

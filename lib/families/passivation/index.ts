@@ -75,6 +75,7 @@ export const passivation: ProcessFamily<PassivationParams> = {
   usesCurrentDensity: false,
   bakeLabel: 'Heat treatment (not usual after passivation)',
   usesEfficiency: false,
+  tankSettings: null,
   form: [
     { name: 'windowId', label: 'Treatment', kind: 'select', options: DEFAULT_PASSIVATION_WINDOWS.map((w) => ({ value: w.id, label: `${w.standard} ${w.treatment}` })) },
     { name: 'minutes', label: 'Immersion time', kind: 'number', unit: 'min' },
@@ -88,6 +89,7 @@ export const passivation: ProcessFamily<PassivationParams> = {
   templates: PASSIVATION_TEMPLATES,
   methods: PASSIVATION_METHODS,
   hazards: ['strong_acid', 'oxidiser'],
+  cautions: (p) => (windowFor(p.windowId)?.acid === 'citric' ? ['acid', 'heat'] : ['nitric-acid', 'acid']),
   runsWithCurrent: false,
   runConditions: ['temperatureC', 'concentration'],
   // No coating: the run is judged against its treatment's window, lot by lot (ASTM A967 §5.2.2).

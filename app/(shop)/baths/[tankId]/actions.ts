@@ -6,6 +6,8 @@ import { formAction } from '@/lib/action';
 import { setupTankAnalytes } from '@/lib/bath/analytes';
 import { updateAnalyteLimits } from '@/lib/bath/limits';
 import { limitsSchema } from '@/lib/bath/schemas';
+import { updateTankSettings } from '@/lib/bath/tank-settings';
+import { displayUnit } from '@/lib/plating';
 
 export const updateLimitsAction = formAction('bath.limits', limitsSchema.extend({ tankId: z.uuid() }), async (input, user) => {
   const { changed } = await updateAnalyteLimits(user, {
@@ -26,4 +28,20 @@ export const setupAnalytesAction = formAction('bath.limits', z.object({ tankId: 
   const added = await setupTankAnalytes(input.tankId);
   revalidatePath(`/baths/${input.tankId}`);
   return { ok: true, message: added ? `${added} analytes set up from the bath template.` : 'The analytes were already set up.' };
+});
+
+const tankSettingsSchema = z.looseObject({
+  tankId: z.uuid(),
+  madeUpOn: z.preprocess((v) => (v === '' || v === undefined ? null : v), z.iso.date({ error: 'Enter the make-up date as a date.' }).nullable()),
+});
+
+export const updateTankSettingsAction = formAction('bath.limits', tankSettingsSchema, async (input, user) => {
+  await updateTankSettings(user, {
+    tankId: input.tankId,
+    form: input,
+    madeUpOn: input.madeUpOn,
+    units: { thickness: displayUnit('thickness', user.unitSystem), temperature: displayUnit('temperature', user.unitSystem) },
+  });
+  revalidatePath(`/baths/${input.tankId}`);
+  return { ok: true, message: 'Process settings saved.' };
 });

@@ -15,7 +15,12 @@ import { findLimitChanges } from '@/lib/bath/limits';
 import { findAnalyteStatus, getTank } from '@/lib/bath/queries';
 import { readSupply } from '@/lib/bath/supplies';
 import { getTemplate } from '@/lib/bath/templates';
+import { findBathAges } from '@/lib/bath/bath-age';
+import { formatWhen } from '@/lib/bath/display';
+import { familyOfTemplate, getFamily } from '@/lib/families';
+import { familyFieldText } from '@/lib/families/form';
 import { AnalytesTable } from './analytes-table';
+import { DecantCalculator, ProcessSettingsForm } from './process-settings';
 import { SetupAnalytesForm } from './setup-form';
 import { AdditionsTable, AnalysesTable } from './tank-records';
 import { TankSide } from './tank-side';
@@ -36,7 +41,11 @@ export default async function BathTankPage({ params }: { params: Promise<{ tankI
     findHullCellPanels(tank.id, 6),
     findAlerts({ open: true, tankId: tank.id }),
   ]);
-  const changes = await findLimitChanges(analytes.map((a) => a.id));
+  const [changes, ages] = await Promise.all([findLimitChanges(analytes.map((a) => a.id)), findBathAges([tank.id])]);
+  const age = ages.get(tank.id) ?? null;
+  const family = getFamily(familyOfTemplate(tank.template_id));
+  const aluminium = analytes.find((a) => a.key === 'aluminium');
+  const acid = analytes.find((a) => a.key === 'sulfuricAcid');
   const system = user.unitSystem;
   return (
     <div className="flex flex-col gap-6">
@@ -62,6 +71,31 @@ export default async function BathTankPage({ params }: { params: Promise<{ tankI
               </li>
             ))}
           </ul>
+        </Card>
+      ) : null}
+      {age ? (
+        <Card title="Bath age">
+          <p className={`text-lg ${age.atEndOfLife ? 'font-semibold text-out' : ''}`}>
+            {age.atEndOfLife ? '▲ At the end of its life: ' : ''}
+            {age.text}
+          </p>
+          <p className="text-sm text-ink-muted">Counted from the nickel replenished since the bath was made up{tank.made_up_at ? ` on ${formatWhen(tank.made_up_at)}` : ''}.</p>
+        </Card>
+      ) : null}
+      {aluminium && acid ? (
+        <Card title="Decant and refill for aluminium">
+          <DecantCalculator volumeL={tank.volume_l} aluminiumGPerL={aluminium.last_value ?? null} acidTargetGPerL={acid.target} aluminiumLimitGPerL={aluminium.upper_control ?? 15} />
+        </Card>
+      ) : null}
+      {family.tankSettings ? (
+        <Card title="Process settings" description={`What this ${family.label.toLowerCase()} tank keeps besides its chemistry.`}>
+          <ProcessSettingsForm
+            tankId={tank.id}
+            fields={family.tankSettings.fields}
+            values={Object.fromEntries(family.tankSettings.fields.map((f) => [f.name, familyFieldText(f, tank.family_settings[f.name] ?? (family.tankSettings!.schema.safeParse({}).data as Record<string, unknown> | undefined)?.[f.name], system)]))}
+            madeUpOn={tank.made_up_at ? tank.made_up_at.toISOString().slice(0, 10) : ''}
+            readOnly={!can(user, 'bath.limits')}
+          />
         </Card>
       ) : null}
       <Card title="Analytes" padding="sm">

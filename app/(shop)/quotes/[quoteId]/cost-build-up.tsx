@@ -6,12 +6,16 @@ import { BASIS_LABELS } from '@/lib/quotes/basis';
 import { componentFigures } from '@/lib/quotes/display';
 import { formatUnitPrice } from '@/lib/quotes/format';
 import type { LinePrice } from '@/lib/quotes/pricing';
+import { FamilyFigures } from '@/components/family-figures/family-figures';
+import { getFamily } from '@/lib/families';
 
 /** The line's cost, cost by cost, then margin, charges and the price: what the estimator checks. */
 export function CostBuildUp({ price, units, caption, quantity }: { price: LinePrice; units: UnitSystem; caption: string; quantity: number }) {
   const j = price.job;
   // A load smaller than the rectifier allows is only "limited" when the lot needs more than one load.
   const perLoad = Math.min(j.partsPerLoad, quantity);
+  // Lines priced before families existed are electroplating.
+  const plating = (price.family ?? 'electroplating') === 'electroplating';
   return (
     <div className="flex flex-col gap-3">
       <SimpleTable
@@ -80,6 +84,7 @@ export function CostBuildUp({ price, units, caption, quantity }: { price: LinePr
           </tr>
         }
       />
+      {price.figures?.length ? <FamilyFigures figures={price.figures} units={units} label={`${getFamily(price.family).label} figures`} /> : null}
       <dl className="grid grid-cols-2 gap-x-4 gap-y-1 text-xs text-ink-muted sm:grid-cols-4">
         <div>
           <dt>Loads</dt>
@@ -87,16 +92,20 @@ export function CostBuildUp({ price, units, caption, quantity }: { price: LinePr
             {j.loads} × {perLoad} pc{j.loadLimitedBy === 'rectifier' && quantity > j.partsPerLoad ? ' (rectifier-limited)' : ''}
           </dd>
         </div>
+        {plating ? (
         <div>
           <dt>Average / minimum thickness</dt>
           <dd className="tabular text-ink">
             {formatStoredQuantity(j.averageThicknessUm, 'thickness', units)} / {formatStoredQuantity(j.minimumThicknessUm, 'thickness', units)}
           </dd>
         </div>
+        ) : null}
+        {j.ampHours > 0 ? (
         <div>
           <dt>Charge</dt>
           <dd className="tabular text-ink">{formatNumber(j.ampHours, 4)} A·h</dd>
         </div>
+        ) : null}
         <div>
           <dt>Time per load / tank time</dt>
           <dd className="tabular text-ink">
@@ -104,13 +113,15 @@ export function CostBuildUp({ price, units, caption, quantity }: { price: LinePr
           </dd>
         </div>
         <div>
-          <dt>Plated area</dt>
+          <dt>{plating ? 'Plated area' : 'Area treated'}</dt>
           <dd className="tabular text-ink">{formatStoredQuantity(j.areaPerLotDm2, 'area', units)}</dd>
         </div>
+        {plating ? (
         <div>
           <dt>Distribution ratio</dt>
           <dd className="tabular text-ink">{formatNumber(j.distributionRatio, 3)} (minimum ÷ average)</dd>
         </div>
+        ) : null}
         <div>
           <dt>Bake</dt>
           <dd className="text-ink">{price.bake.applies ? price.bake.reason : 'Not required'}</dd>

@@ -24,7 +24,11 @@ export default async function PortalCertificatePage({ params }: { params: Promis
     ['Part', `${c.part.number}${c.part.revision ? ` rev ${c.part.revision}` : ''} · ${c.part.description}`],
     ['Quantity', `${c.order.quantity.toLocaleString('en-US')} pieces`],
     ['Finish', `${c.finish.name} · ${c.finish.specText}`],
-    ['Thickness', `${c.thickness.count} readings on ${c.thickness.partsMeasured} parts: mean ${q(c.thickness.meanUm)}, minimum ${q(c.thickness.minUm)}, maximum ${q(c.thickness.maxUm)} (specified minimum ${q(c.finish.minThicknessUm)})`],
+    ...(c.process ? ([['Process', c.process.statement]] as [string, string][]) : []),
+    ...(c.process?.records.map((r) => [r.label, `${r.result} (${r.verdict === 'pass' ? 'conforms' : 'does not conform'})`] as [string, string]) ?? []),
+    ...(c.process?.runConditions.length ? ([['Conditions', c.process.runConditions.join('; ')]] as [string, string][]) : []),
+    ...(c.process?.life ? ([['Expected coating life', `${c.process.life.text} in ${c.process.life.category} (${c.process.life.standard}). ${c.process.life.note}`]] as [string, string][]) : []),
+    ...(c.process?.reportsThickness === false ? [] : ([['Thickness', `${c.thickness.count} readings on ${c.thickness.partsMeasured} parts: mean ${q(c.thickness.meanUm)}, minimum ${q(c.thickness.minUm)}, maximum ${q(c.thickness.maxUm)} (specified minimum ${q(c.finish.minThicknessUm)})`]] as [string, string][])),
     ['Relief bake', c.bake.required ? `${c.bake.durationH} h at ${formatStoredQuantity(c.bake.tempMinC, 'temperature', user.unitSystem)} to ${formatStoredQuantity(c.bake.tempMaxC, 'temperature', user.unitSystem)} in ${c.bake.oven}, started ${formatShopTime(c.bake.bakeStartedAt, c.timeZone)}` : c.bake.note],
     ['Signed', `${c.signedBy.name}, ${c.signedBy.role}, ${formatShopTime(c.signedAt, c.timeZone)}`],
   ];

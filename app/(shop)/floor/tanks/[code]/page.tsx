@@ -8,6 +8,7 @@ import { LinkButton } from '@/components/ui/button';
 import { EmptyState } from '@/components/ui/empty-state';
 import { PageHeader } from '@/components/ui/page-header';
 import { requirePageUser } from '@/lib/auth/current-user';
+import { findBathAges } from '@/lib/bath/bath-age';
 import { getFloorTank } from '@/lib/bath/floor-queries';
 import { OutboxPanel } from '../../_ui/outbox-panel';
 
@@ -18,6 +19,7 @@ export default async function FloorTankPage({ params }: { params: Promise<{ code
   const user = await requirePageUser('bath.log', `/floor/tanks/${code}`);
   const tank = await getFloorTank({ code });
   if (!tank) notFound();
+  const age = (await findBathAges([tank.id])).get(tank.id) ?? null;
   return (
     <div className="mx-auto flex max-w-3xl flex-col gap-5">
       <PageHeader
@@ -26,6 +28,12 @@ export default async function FloorTankPage({ params }: { params: Promise<{ code
         description={`${tank.templateName} · ${formatBathValue(tank.volumeL, 'L', user.unitSystem)} · ${tank.lineName}`}
       />
       <OutboxPanel />
+      {age ? (
+        <p className={`rounded-lg border px-4 py-3 text-lg ${age.atEndOfLife ? 'border-out bg-out-soft font-semibold' : 'border-surface-line bg-surface'}`}>
+          {age.atEndOfLife ? '▲ End of life reached: ' : 'Bath age: '}
+          {age.text}
+        </p>
+      ) : null}
       <BathCaution hazards={tank.hazards} />
       <section aria-labelledby="analyses-h" className="flex flex-col gap-2">
         <h2 id="analyses-h" className="text-lg font-semibold text-ink">Log an analysis</h2>

@@ -18,6 +18,8 @@ import {
   voidReadingSchema,
 } from '@/lib/quality/schemas';
 import { CsvRejected, recordReadings, recordReadingsCsv, voidReading } from '@/lib/quality/thickness';
+import { PROCESS_RECORD_LABELS, processRecordSchema, voidProcessRecordSchema } from '@/lib/quality/process-record-rules';
+import { recordProcessRecord, voidProcessRecord } from '@/lib/quality/process-records';
 
 const refresh = (workOrderId: string) => revalidatePath(`/quality/orders/${workOrderId}`);
 
@@ -126,4 +128,16 @@ export const issueCertificateAction = formAction('quality.read', issueCertificat
   refresh(input.workOrderId);
   revalidatePath('/quality/certificates');
   return { ok: true, message: `Certificate ${c.number} issued and signed by ${user.name}.` };
+});
+
+export const recordProcessRecordAction = formAction('quality.record', processRecordSchema, async (input, user): Promise<FormState> => {
+  const r = await recordProcessRecord(user, input);
+  refresh(input.workOrderId);
+  return { ok: true, message: r.verdict === 'pass' ? `${PROCESS_RECORD_LABELS[input.kind]} recorded: passes.` : `${PROCESS_RECORD_LABELS[input.kind]} recorded: fails. ${r.reasons.join(' ')}` };
+});
+
+export const voidProcessRecordAction = formAction('quality.disposition', voidProcessRecordSchema, async (input, user): Promise<FormState> => {
+  await voidProcessRecord(user, input);
+  refresh(input.workOrderId);
+  return { ok: true, message: 'Record voided.' };
 });

@@ -8,11 +8,16 @@ import { formatShopTime } from '@/lib/quality/shop-time';
 import { IssueCertificateForm } from './small-forms';
 
 const TITLES: Record<LotCheck['key'], string> = {
-  runs: 'Plating runs',
+  runs: 'Process runs',
   thickness_count: 'Thickness sample',
   thickness_pass: 'Thickness verdict',
   bake: 'Relief bake',
   nonconformance: 'Nonconformances',
+  seal_test: 'Seal quality',
+  phosphorus_content: 'Phosphorus content',
+  passivation_lot: 'Passivation window',
+  passivation_test: 'Verification test',
+  salt_spray: 'Salt spray',
 };
 
 /** Where the lot stands against each record a certificate needs, and the certificate itself. */

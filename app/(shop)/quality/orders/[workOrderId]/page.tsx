@@ -6,12 +6,15 @@ import { Badge } from '@/components/ui/badge';
 import { PageHeader } from '@/components/ui/page-header';
 import { can, requirePageUser } from '@/lib/auth/current-user';
 import { STATE_LABELS } from '@/lib/orders/states';
-import { lotBake, lotChecks, thicknessState } from '@/lib/quality/lot-checks';
+import { phosphorusRangeFor } from '@/lib/families/electroless-nickel';
+import { lotBake, lotChecks, lotFamily, thicknessState } from '@/lib/quality/lot-checks';
 import { getLotView } from '@/lib/quality/lot-view';
 import { shopTimeZone } from '@/lib/quality/shop-time';
 import { BakeCard } from './bake-card';
 import { CertificateCard } from './certificate-card';
 import { NonconformanceCard } from './nonconformance-card';
+import type { RecordKindForForm } from './process-record-forms';
+import { ProcessRecordsCard } from './process-records-card';
 import { ThicknessCard } from './thickness-card';
 
 export const metadata: Metadata = { title: 'Lot quality' };
@@ -29,6 +32,12 @@ export default async function LotQualityPage({ params }: { params: Promise<{ wor
   const t = thicknessState(lot);
   const req = lotBake(lot);
   const checks = lotChecks(lot);
+  const { family, params: fp } = lotFamily(lot);
+  const needsThickness = family.quality.some((q) => q.kind === 'thickness');
+  // The family's own records with a form (passivation conditions come with each run; salt spray only when asked).
+  const recordKinds = family.quality
+    .map((q) => q.kind)
+    .filter((k): k is RecordKindForForm => k === 'seal_test' || k === 'phosphorus_content' || k === 'passivation_test' || (k === 'salt_spray' && typeof fp.saltSprayHours === 'number'));
   const units = user.unitSystem;
   const o = lot.order;
   const bake = req.required ? (
@@ -65,7 +74,21 @@ export default async function LotQualityPage({ params }: { params: Promise<{ wor
       />
       <CertificateCard lot={lot} checks={checks} bath={bath} tz={tz} canIssue={can(user, 'certificates.issue')} />
       {bakeFirst ? bake : null}
-      <ThicknessCard lot={lot} t={t} units={units} tz={tz} canRecord={can(user, 'quality.record')} canVoid={can(user, 'quality.disposition')} open={OPEN_STATES.has(o.state)} />
+      {needsThickness ? (
+        <ThicknessCard lot={lot} t={t} units={units} tz={tz} canRecord={can(user, 'quality.record')} canVoid={can(user, 'quality.disposition')} open={OPEN_STATES.has(o.state)} />
+      ) : null}
+      {recordKinds.length ? (
+        <ProcessRecordsCard
+          lot={lot}
+          kinds={recordKinds}
+          checks={checks}
+          tz={tz}
+          canRecord={can(user, 'quality.record')}
+          canVoid={can(user, 'quality.disposition')}
+          phosphorusRange={typeof fp.phosphorusWtPct === 'number' ? phosphorusRangeFor(fp.phosphorusWtPct) : null}
+          saltSprayHours={typeof fp.saltSprayHours === 'number' ? fp.saltSprayHours : null}
+        />
+      ) : null}
       {req.required && !bakeFirst ? bake : null}
       <NonconformanceCard lot={lot} tz={tz} canOpen={can(user, 'quality.record')} canDisposition={can(user, 'quality.disposition')} />
     </div>

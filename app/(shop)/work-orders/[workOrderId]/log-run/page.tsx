@@ -5,6 +5,7 @@ import { Caution } from '@/components/ui/caution';
 import { EmptyState } from '@/components/ui/empty-state';
 import { PageHeader } from '@/components/ui/page-header';
 import { requirePageUser } from '@/lib/auth/current-user';
+import { familyParams, getFamily } from '@/lib/families';
 import { findTanksForFinish, getWorkOrder } from '@/lib/orders/queries';
 import { formatStoredQuantity } from '@/lib/plating';
 import { RunForm } from './run-form';
@@ -20,25 +21,29 @@ export default async function LogRunPage({ params }: { params: Promise<{ workOrd
   const wo = UUID.test(workOrderId) ? await getWorkOrder(workOrderId) : null;
   if (!wo) notFound();
   const tanks = await findTanksForFinish(wo);
+  const family = getFamily(wo.family);
   const open = wo.state === 'received' || wo.state === 'in_process';
   return (
     <div className="mx-auto flex max-w-lg flex-col gap-4">
       <PageHeader
         eyebrow={<Link href={`/work-orders/${wo.id}`}>{wo.number}</Link>}
-        title="Log a plating run"
+        title={family.runsWithCurrent ? 'Log a plating run' : `Log a ${family.label.toLowerCase()} run`}
         description={`${wo.part_number} · ${wo.finish_code} · minimum ${formatStoredQuantity(wo.min_thickness_um, 'thickness', user.unitSystem)}`}
       />
-      <Caution kind={['electrical', 'hydrogen']} />
+      <Caution kind={[...new Set([...family.cautions(familyParams(family.id, wo.family_params)), ...(family.runsWithCurrent ? (['hydrogen'] as const) : [])])]} />
       {!open ? (
         <EmptyState title="Runs cannot be logged now" description={wo.state === 'accepted' ? 'Receive the parts first.' : 'Plating is finished on this order.'} action={<Link href={`/work-orders/${wo.id}`}>Back to the order</Link>} />
       ) : tanks.length === 0 ? (
-        <EmptyState title="No tank plates this finish" description="No active tank plates this metal with a known efficiency. A supervisor can activate one." />
+        <EmptyState title="No tank runs this finish" description={`No active ${family.label.toLowerCase()} tank runs this finish${family.usesEfficiency ? ' with a known efficiency' : ''}. A supervisor can activate one.`} />
       ) : (
         <RunForm
           workOrderId={wo.id}
           units={user.unitSystem}
-          tanks={tanks.map((t) => ({ id: t.id, code: t.code, name: t.name, efficiency: t.efficiency as number, rectifierMaxA: t.rectifierMaxA, hasAhMeter: t.hasAhMeter }))}
-          finish={{ element: wo.element, ionCharge: wo.ion_charge, distributionRatio: wo.distribution_ratio, minThicknessUm: wo.min_thickness_um, areaPerPartDm2: wo.area_dm2, partsPerLoad: wo.parts_per_load }}
+          tanks={tanks.map((t) => ({ id: t.id, code: t.code, name: t.name, efficiency: t.efficiency, rectifierMaxA: t.rectifierMaxA, hasAhMeter: t.hasAhMeter, settings: t.familySettings }))}
+          finish={{
+            family: family.id, params: familyParams(family.id, wo.family_params), element: wo.element, ionCharge: wo.ion_charge, distributionRatio: wo.distribution_ratio,
+            minThicknessUm: wo.min_thickness_um, areaPerPartDm2: wo.area_dm2, partsPerLoad: Math.min(wo.parts_per_load, wo.quantity_received || wo.quantity_ordered),
+          }}
         />
       )}
     </div>
