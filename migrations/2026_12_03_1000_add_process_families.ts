@@ -16,7 +16,11 @@ export async function up(db: Kysely<any>): Promise<void> {
       alter column efficiency drop not null,
       add constraint finishes_family_current check (
         (family in ('electroplating', 'anodizing')) = (current_density_adm2 is not null)),
-      add constraint finishes_family_efficiency check ((family = 'electroplating') = (efficiency is not null));
+      add constraint finishes_family_efficiency check ((family = 'electroplating') = (efficiency is not null)),
+      -- passivation makes no coating: its finishes carry no thickness
+      drop constraint finishes_min_thickness_um_check,
+      add constraint finishes_min_thickness_um_check check (
+        min_thickness_um >= 0 and min_thickness_um < 5000 and (family = 'passivation' or min_thickness_um > 0));
 
     alter table tanks add column family_settings jsonb not null default '{}'::jsonb;
     -- A bath at the end of the life the shop set (an electroless bath's metal turnovers).

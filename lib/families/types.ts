@@ -64,6 +64,8 @@ export type ProcessFamily<P = Record<string, unknown>> = {
   label: string;
   /** The metal the finish is about when the family fixes it (null: the estimator picks one). */
   metal: { element: string; charge: number; label: string } | null;
+  /** Whether the process leaves a coating with a thickness (passivation does not). */
+  makesCoating: boolean;
   /** Whether the finish carries a current density (and a cathode efficiency, for plating). */
   usesCurrentDensity: boolean;
   usesEfficiency: boolean;

@@ -39,7 +39,7 @@ export const finishSchema = z
       .refine((r) => r.length <= 30, 'Use at most 30 steps.')
       .refine((r) => r.every((s) => s.step.length <= 120 && (s.note ?? '').length <= 200), 'Keep each step under 120 characters and each note under 200.'),
     metal: z.string().optional(),
-    minThickness: numberField('the minimum thickness', { positive: true }),
+    minThickness: optionalNumberField('the minimum thickness', { positive: true }),
     maxThickness: optionalNumberField('the maximum thickness', { positive: true }),
     thicknessUnit: unitEnum('thickness', 'thickness'),
     method: z.enum(['rack', 'barrel'], { error: 'Choose rack or barrel.' }),
@@ -64,6 +64,7 @@ export const finishSchema = z
   .superRefine((v, ctx) => {
     const family = getFamily(v.family);
     if (!family.metal && !PLATING_METALS.some((m) => m.key === v.metal)) ctx.addIssue({ code: 'custom', path: ['metal'], message: 'Choose the metal.' });
+    if (family.makesCoating && v.minThickness === null) ctx.addIssue({ code: 'custom', path: ['minThickness'], message: 'Enter the minimum thickness.' });
     if (family.usesCurrentDensity && v.currentDensity === null) ctx.addIssue({ code: 'custom', path: ['currentDensity'], message: 'Enter the current density.' });
     if (family.usesEfficiency && v.efficiencyPercent === null) ctx.addIssue({ code: 'custom', path: ['efficiencyPercent'], message: 'Enter the cathode efficiency.' });
     const { parsed } = familyParamsFrom(v, v.thicknessUnit ?? 'um', v.temperatureUnit ?? 'degC');
@@ -80,7 +81,8 @@ export const finishSchema = z
     const { family, parsed } = familyParamsFrom(v, v.thicknessUnit, v.temperatureUnit);
     const adm2 = family.usesCurrentDensity && v.currentDensity !== null ? toStorage(v.currentDensity, v.currentDensityUnit) : null;
     // Table limits (finishes CHECKs): thickness < 5000 µm, current density ≤ 100 A/dm², bake 0–400 °C.
-    if (um(v.minThickness) >= 5000) ctx.addIssue({ code: 'custom', path: ['minThickness'], message: 'That thickness is more than 5 mm.' });
+    const minUm = family.makesCoating && v.minThickness !== null ? um(v.minThickness) : 0;
+    if (minUm >= 5000) ctx.addIssue({ code: 'custom', path: ['minThickness'], message: 'That thickness is more than 5 mm.' });
     if (adm2 !== null && adm2 > 100) ctx.addIssue({ code: 'custom', path: ['currentDensity'], message: 'That current density is above 100 A/dm².' });
     if (bakeTempC !== null && (bakeTempC <= 0 || bakeTempC >= 400)) ctx.addIssue({ code: 'custom', path: ['bakeTemp'], message: 'The bake temperature must be between 0 and 400 °C.' });
     const metal = family.metal ?? PLATING_METALS.find((m) => m.key === v.metal)!;
@@ -94,8 +96,8 @@ export const finishSchema = z
       process_route: v.route,
       element: metal.element,
       ion_charge: metal.charge,
-      min_thickness_um: um(v.minThickness),
-      max_thickness_um: v.maxThickness === null ? null : um(v.maxThickness),
+      min_thickness_um: minUm,
+      max_thickness_um: v.maxThickness === null || !family.makesCoating ? null : um(v.maxThickness),
       method: v.method,
       current_density_adm2: adm2,
       efficiency: family.usesEfficiency && v.efficiencyPercent !== null ? v.efficiencyPercent / 100 : null,

@@ -14,6 +14,8 @@ type Saved = {
   substrate: string;
   tensile_mpa: number | null;
   hardness_hrc: number | null;
+  corrosivity_category: string | null;
+  design_life_years: number | null;
   area_dm2: number;
   weight_g: number | null;
   drawing_file_id: string | null;
@@ -43,6 +45,8 @@ export function partFormDefaults(part: Saved | null, system: UnitSystem, custome
     substrate: (part?.substrate ?? 'carbon-steel') as SubstrateId,
     tensileMpa: text(part?.tensile_mpa ?? null),
     hardnessHrc: text(part?.hardness_hrc ?? null),
+    corrosivityCategory: part?.corrosivity_category ?? '',
+    designLifeYears: text(part?.design_life_years ?? null),
     weight: part?.weight_g ? shown(fromStorage(part.weight_g, massUnit)) : '',
     weightUnit: massUnit,
     drawing: { fileId: part?.drawing_file_id ?? '', fileName: part?.drawing_name ?? '' },

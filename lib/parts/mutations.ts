@@ -64,6 +64,8 @@ export async function savePart(actor: SessionUser, input: PartInput, q: Kysely<D
       substrate: input.substrate,
       tensile_mpa: input.tensileMpa,
       hardness_hrc: input.hardnessHrc,
+      corrosivity_category: input.corrosivityCategory,
+      design_life_years: input.designLifeYears,
       area_dm2: measured.areaDm2,
       weight_g: partWeightG(input, measured.volumeCm3, input.substrate),
       calculation_id: calculationId,

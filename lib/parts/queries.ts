@@ -22,6 +22,8 @@ export async function getPart(partId: string) {
       'p.substrate',
       'p.tensile_mpa',
       'p.hardness_hrc',
+      'p.corrosivity_category',
+      'p.design_life_years',
       'p.area_dm2',
       'p.weight_g',
       'p.drawing_file_id',

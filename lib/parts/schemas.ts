@@ -1,6 +1,6 @@
 // Form and import input for parts; shared by the server action, the CSV import and tests.
 import { z } from 'zod';
-import { SUBSTRATES, unitsOf, type UnitOf } from '@/lib/plating';
+import { CORROSIVITY_CATEGORIES, SUBSTRATES, unitsOf, type UnitOf } from '@/lib/plating';
 import { numberField, optionalNumberField, optionalText, requiredText, uuidField } from '@/lib/records/fields';
 import { isShapeKind, measureShapeEntry, SHAPES, shapeField, type LengthUnit, type ShapeEntry } from './shapes';
 
@@ -21,6 +21,9 @@ export const partFields = {
   hardnessHrc: optionalNumberField('the hardness', { positive: true, max: 79 }),
   weight: optionalNumberField('the weight', { positive: true }),
   weightUnit: z.enum(MASS_UNITS as [UnitOf<'mass'>, ...UnitOf<'mass'>[]], { error: 'Choose a unit of weight.' }).default('g'),
+  // Where the customer says the part will serve (ISO 9223), and the life they ask of the coating.
+  corrosivityCategory: z.preprocess((v) => (v === '' || v === undefined ? null : v), z.enum(CORROSIVITY_CATEGORIES, { error: 'Choose an ISO 9223 category.' }).nullable()).default(null),
+  designLifeYears: optionalNumberField('the design life', { positive: true, max: 200 }).default(null),
 };
 
 export type PartArea =

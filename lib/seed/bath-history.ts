@@ -63,6 +63,14 @@ function spread(a: SeedAnalyte): number {
 function asMeasured(a: SeedAnalyte, wanted: number): { value: number; inputs: AnalysisInputs } | null {
   const method = getMethod(a.methodId);
   if (!method) return null;
+  if (method.kind === 'titration' && method.back) {
+    // A back-titration: the blank less what the sample took.
+    const blankMl = 50;
+    const buretteMl = Math.max(0.05, Math.round((blankMl - wanted / factorPerMl(method)) / 0.05) * 0.05);
+    const inputs = { buretteMl: Number(buretteMl.toFixed(2)), blankMl };
+    const r = computeAnalysis(method, inputs);
+    return r.ok ? { value: Number(r.value.toFixed(4)), inputs } : null;
+  }
   if (method.kind === 'titration') {
     const buretteMl = Math.max(0.05, Math.round(wanted / factorPerMl(method) / 0.05) * 0.05);
     const r = computeAnalysis(method, { buretteMl: Number(buretteMl.toFixed(2)) });
@@ -93,6 +101,17 @@ export function analyteHistory(tankCode: string, a: SeedAnalyte): SeedPoint[] {
     if (m) points.push({ day, ...m });
   }
   return points;
+}
+
+/**
+ * When in its day a reading was taken: each tank has its own round on the morning shift (06:00–
+ * 14:00), and each analyte its own minutes in it, so no two tanks share a time stamp. Minutes
+ * before the seed's reference time, 0–480.
+ */
+export function readingOffsetMinutes(tankCode: string, key: string, day: number): number {
+  const tankRound = hashSeed(tankCode) % 360;
+  const jitter = hashSeed(`${tankCode}:${key}:${day}`) % 90;
+  return tankRound + jitter;
 }
 
 /** Daily amp-hour meter totals: the rectifier runs about 14–18 h a day at 30–50 % of its rating. */

@@ -9,7 +9,10 @@ import { limitsOf, setupTankAnalytes, supplyOf } from '@/lib/bath/analytes';
 import { evaluateValue } from '@/lib/bath/evaluate';
 import { rulesAtLast } from '@/lib/bath/run-rules';
 import { DEMO_TANKS } from './core-records';
-import { analyteHistory, DRIFT, EXCURSION, HISTORY_DAYS, meterHistory, MISTYPED } from './bath-history';
+import { EN_TEMPLATES } from '@/lib/families/electroless-nickel/bath';
+import { analyteHistory, DRIFT, EXCURSION, hashSeed, HISTORY_DAYS, meterHistory, MISTYPED, readingOffsetMinutes } from './bath-history';
+
+const EN_TEMPLATE_IDS = new Set(EN_TEMPLATES.map((t) => t.id));
 import { seedBathExtras } from './bath-extras';
 
 const DAY_MS = 86_400_000;
@@ -56,7 +59,7 @@ export async function seedBath(db: Db): Promise<void> {
         tank_id: tank.id, analyte_id: a.id, method_id: a.method_id, inputs: JSON.stringify(p.inputs), value: p.value, unit: a.unit,
         verdict: judged.verdict.status, severity: judged.verdict.severity, rules,
         recommendation: judged.recommendation.kind === 'none' ? null : JSON.stringify(judged.recommendation),
-        source: 'seed', taken_at: at(p.day, (i * 7) % 40), logged_by: plater, idempotency_key: key,
+        source: 'seed', taken_at: at(p.day, -readingOffsetMinutes(tank.code, a.key, p.day)), logged_by: plater, idempotency_key: key,
       });
       if (i === history.length - 1) lastIds.set(a.id, { key, rules, verdict: judged.verdict.status });
     });
@@ -64,6 +67,7 @@ export async function seedBath(db: Db): Promise<void> {
   for (let i = 0; i < rows.length; i += 500) await db.insertInto('analyses').values(rows.slice(i, i + 500)).execute();
 
   await seedMeterAndAdditives(db, tanks, analytes, plater, at);
+  await seedNickelReplenishment(db, tanks, analytes, plater, at);
   await seedBathExtras(db, { tanks, analytes, plater, supervisor, at, mistyped: MISTYPED, excursion: EXCURSION });
 
   // The drifting analyte's last reading raises its alerts, as logging it would have.
@@ -136,5 +140,35 @@ async function seedMeterAndAdditives(db: Db, tanks: SeedTank[], analytes: SeedAn
       }
       if (rows.length) await db.insertInto('additions').values(rows).execute();
     }
+  }
+}
+
+/**
+ * The electroless bath's nickel put back since its make-up: nickel sulfate on each working day, so
+ * its age reads a few metal turnovers (the amounts are invented; about 1.2 kg a day).
+ */
+async function seedNickelReplenishment(
+  db: Db,
+  tanks: { id: string; code: string; template_id: string; made_up_at: Date | null }[],
+  analytes: { id: string; tank_id: string; key: string }[],
+  plater: string,
+  at: (day: number, minutes?: number) => Date,
+): Promise<void> {
+  for (const t of tanks) {
+    const nickel = analytes.find((a) => a.tank_id === t.id && a.key === 'nickel');
+    if (!t.made_up_at || !nickel || !EN_TEMPLATE_IDS.has(t.template_id)) continue;
+    const sinceDays = Math.floor((Date.now() - t.made_up_at.getTime()) / DAY_MS);
+    const rows = [];
+    for (let back = sinceDays - 1; back >= 1; back--) {
+      const day = HISTORY_DAYS - 1 - back;
+      if (day % 7 === 5 || day % 7 === 6) continue; // no additions at the weekend
+      const kg = Number((1.1 + (hashSeed(`${t.code}:ni:${day}`) % 30) / 100).toFixed(2));
+      rows.push({
+        tank_id: t.id, analyte_id: nickel.id, kind: 'correction' as const, material: 'Nickel sulfate hexahydrate', amount: kg, unit: 'kg' as const,
+        recommended_amount: kg, recommended_unit: 'kg' as const, reason: 'Nickel replenishment after the shift analysis',
+        made_at: at(day, -readingOffsetMinutes(t.code, 'nickel', day) + 20), made_by: plater, idempotency_key: `seed:${t.code}:ni-add:${day}`,
+      });
+    }
+    if (rows.length) await db.insertInto('additions').values(rows).execute();
   }
 }

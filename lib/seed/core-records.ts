@@ -6,6 +6,9 @@ export const DEMO_LINES = [
   { name: 'Rack nickel line', method: 'rack', description: 'Acid copper and Watts nickel on racks' },
   { name: 'Barrel zinc line', method: 'barrel', description: 'Alkaline zinc in barrels, then passivate' },
   { name: 'Precious metals line', method: 'mixed', description: 'Cyanide silver, acid gold and acid tin for electrical contacts' },
+  { name: 'Electroless nickel line', method: 'rack', description: 'Mid-phosphorus electroless nickel on racks and in baskets' },
+  { name: 'Anodizing line', method: 'rack', description: 'Sulfuric and hard anodizing of aluminium, then the seal' },
+  { name: 'Passivation line', method: 'mixed', description: 'Nitric acid passivation of stainless steel in baskets' },
 ] as const;
 
 type DemoTank = {
@@ -22,6 +25,10 @@ type DemoTank = {
   anode_type: 'soluble' | 'insoluble' | 'none';
   temp_min_c: number | null;
   temp_max_c: number | null;
+  /** What the tank's process family keeps (lib/families): make-up nickel, end of life, a measured constant. */
+  family_settings?: Record<string, number>;
+  /** Days before the seed run that the bath was made up. */
+  made_up_days_ago?: number;
 };
 
 // Efficiencies are typical values (reference §2); the demo shop's own numbers are invented.
@@ -34,6 +41,20 @@ export const DEMO_TANKS: DemoTank[] = [
   { line: 'Precious metals line', code: 'P-AG1', name: 'Cyanide silver', template_id: 'cyanide-silver', volume_l: 200, element: 'Ag', ion_charge: 1, efficiency: 0.98, rectifier_max_a: 100, has_ah_meter: true, anode_type: 'soluble', temp_min_c: 20, temp_max_c: 30 },
   { line: 'Precious metals line', code: 'P-AU1', name: 'Acid gold', template_id: 'acid-gold', volume_l: 60, element: 'Au', ion_charge: 1, efficiency: 0.45, rectifier_max_a: 20, has_ah_meter: true, anode_type: 'insoluble', temp_min_c: 30, temp_max_c: 50 },
   { line: 'Precious metals line', code: 'P-SN1', name: 'Acid tin', template_id: 'acid-tin', volume_l: 400, element: 'Sn', ion_charge: 2, efficiency: 0.95, rectifier_max_a: 300, has_ah_meter: true, anode_type: 'soluble', temp_min_c: 15, temp_max_c: 30 },
+  // The other families' tanks; their settings and costs are the invented shop's own.
+  { line: 'Barrel zinc line', code: 'Z-TP1', name: 'Trivalent passivate', template_id: 'trivalent-passivate', volume_l: 600, element: null, ion_charge: null, efficiency: null, rectifier_max_a: null, has_ah_meter: false, anode_type: 'none', temp_min_c: 20, temp_max_c: 30 },
+  {
+    line: 'Electroless nickel line', code: 'E-EN1', name: 'Electroless nickel', template_id: 'electroless-nickel-mid-phos', volume_l: 400, element: null, ion_charge: null, efficiency: null,
+    rectifier_max_a: null, has_ah_meter: false, anode_type: 'none', temp_min_c: 85, temp_max_c: 90,
+    family_settings: { nickelMakeUpGPerL: 6, endOfLifeMto: 8, makeUpCostCents: 184000, disposalCostCents: 96000 }, made_up_days_ago: 40,
+  },
+  { line: 'Anodizing line', code: 'A-AN1', name: 'Sulfuric anodize', template_id: 'sulfuric-anodize', volume_l: 2500, element: null, ion_charge: null, efficiency: null, rectifier_max_a: 1500, has_ah_meter: true, anode_type: 'none', temp_min_c: 18, temp_max_c: 22 },
+  {
+    line: 'Anodizing line', code: 'A-HC1', name: 'Hard anodize', template_id: 'hard-anodize', volume_l: 1200, element: null, ion_charge: null, efficiency: null, rectifier_max_a: 1000,
+    has_ah_meter: true, anode_type: 'none', temp_min_c: 0, temp_max_c: 5, family_settings: { constantAminPerDm2PerUm: 3.35 },
+  },
+  { line: 'Anodizing line', code: 'A-SL1', name: 'Hot water seal', template_id: 'hot-water-seal', volume_l: 1500, element: null, ion_charge: null, efficiency: null, rectifier_max_a: null, has_ah_meter: false, anode_type: 'none', temp_min_c: 96, temp_max_c: 100 },
+  { line: 'Passivation line', code: 'P-NT1', name: 'Nitric passivation', template_id: 'nitric-passivation', volume_l: 800, element: null, ion_charge: null, efficiency: null, rectifier_max_a: null, has_ah_meter: false, anode_type: 'none', temp_min_c: 21, temp_max_c: 32 },
 ];
 
 export const DEMO_FINISHES = [
@@ -69,6 +90,38 @@ export const DEMO_FINISHES = [
   },
 ] as const;
 
+/** The other families' finishes; each names its family and carries that family's own figures. */
+export const DEMO_FAMILY_FINISHES = [
+  {
+    code: 'EN-B733-25', name: 'Electroless nickel, mid-phosphorus 25 µm', spec_text: 'ASTM B733 Type IV (5–9 % P), SC3, 25 µm min', family: 'electroless_nickel',
+    family_params: { depositionRateUmPerH: 15, phosphorusWtPct: 8 },
+    element: 'Ni', ion_charge: 2, min_thickness_um: 25, method: 'rack', current_density_adm2: null, efficiency: null, distribution_ratio: 0.95,
+    tank_volts: 6, parts_per_load: 12, handling_minutes_per_load: 25, bake_required: false, bake_threshold_hrc: 31, bake_window_hours: 4, bake_temp_c: null, bake_hours: null,
+    process_route: [{ step: 'Alkaline soak clean' }, { step: 'Acid activate' }, { step: 'Electroless nickel', note: 'about 88 °C' }, { step: 'Rinse and dry' }],
+  },
+  {
+    code: 'AN-8625-II', name: 'Sulfuric anodize Type II, clear, sealed', spec_text: 'MIL-A-8625 Type II Class 1, sealed', family: 'anodizing',
+    family_params: { coatingType: 'II', growthFraction: 0.33, seal: 'hot_water', sealMinutes: 30 },
+    element: 'Al', ion_charge: 3, min_thickness_um: 10, max_thickness_um: 25, method: 'rack', current_density_adm2: 1.5, efficiency: null, distribution_ratio: 0.85,
+    tank_volts: 16, parts_per_load: 60, handling_minutes_per_load: 20, bake_required: false, bake_threshold_hrc: null, bake_window_hours: 4, bake_temp_c: null, bake_hours: null,
+    process_route: [{ step: 'Non-etch alkaline clean' }, { step: 'Deoxidize' }, { step: 'Sulfuric anodize' }, { step: 'Hot deionised-water seal' }],
+  },
+  {
+    code: 'AN-8625-III', name: 'Hard anodize Type III, 50 µm, unsealed', spec_text: 'MIL-A-8625 Type III Class 1, 0.002 in', family: 'anodizing',
+    family_params: { coatingType: 'III', growthFraction: 0.5, seal: 'none', sealMinutes: 0 },
+    element: 'Al', ion_charge: 3, min_thickness_um: 50, max_thickness_um: 60, method: 'rack', current_density_adm2: 3, efficiency: null, distribution_ratio: 0.9,
+    tank_volts: 40, parts_per_load: 20, handling_minutes_per_load: 25, bake_required: false, bake_threshold_hrc: null, bake_window_hours: 4, bake_temp_c: null, bake_hours: null,
+    process_route: [{ step: 'Non-etch alkaline clean' }, { step: 'Deoxidize' }, { step: 'Hard anodize', note: 'about 0–5 °C' }],
+  },
+  {
+    code: 'PS-A967-N2', name: 'Passivate stainless, nitric', spec_text: 'ASTM A967 Nitric 2, water immersion test', family: 'passivation',
+    family_params: { windowId: 'a967-nitric-2', minutes: 30, temperatureC: 27, concentration: 25, verificationTest: 'water_immersion' },
+    element: 'Cr', ion_charge: 3, min_thickness_um: 0, method: 'rack', current_density_adm2: null, efficiency: null, distribution_ratio: 1,
+    tank_volts: 6, parts_per_load: 250, handling_minutes_per_load: 15, bake_required: false, bake_threshold_hrc: null, bake_window_hours: 4, bake_temp_c: null, bake_hours: null,
+    process_route: [{ step: 'Alkaline clean' }, { step: 'Rinse' }, { step: 'Nitric acid passivate' }, { step: 'Rinse', note: 'deionised water' }, { step: 'Dry' }],
+  },
+] as const;
+
 // Invented prices for the demo shop.
 export const DEMO_RATES = {
   effective_from: '2026-01-01',
@@ -92,19 +145,35 @@ export const DEMO_PARTS = [
   { customer: 'HVI', part_number: 'HV-STEM-220', revision: 'B', description: 'Valve stem, 22 mm × 180 mm', substrate: 'carbon-steel', tensile_mpa: 650, hardness_hrc: null, area_dm2: 1.32, weight_g: 540 },
   { customer: 'BRL', part_number: 'BL-BUS-0450', revision: 'D', description: 'Copper bus bar 45 × 6 × 300 mm', substrate: 'copper', tensile_mpa: null, hardness_hrc: null, area_dm2: 3.15, weight_g: 726 },
   { customer: 'BRL', part_number: 'BL-PIN-0102', revision: 'A', description: 'Brass contact pin 2 mm', substrate: 'brass', tensile_mpa: null, hardness_hrc: null, area_dm2: 0.0081, weight_g: 0.4 },
+  { customer: 'HVI', part_number: 'HV-BODY-120', revision: 'A', description: 'Valve body, 120 mm, machined steel', substrate: 'carbon-steel', tensile_mpa: 580, hardness_hrc: null, area_dm2: 4.6, weight_g: 2950 },
+  { customer: 'HVI', part_number: 'HV-ACT-6061', revision: 'C', description: 'Actuator housing, 6061 aluminium, 60 × 40 × 25 mm', substrate: 'aluminium', tensile_mpa: null, hardness_hrc: null, area_dm2: 1.45, weight_g: 118 },
+  { customer: 'HVI', part_number: 'HV-PST-7075', revision: 'A', description: 'Guide piston, 7075 aluminium, Ø 30 × 80 mm', substrate: 'aluminium', tensile_mpa: null, hardness_hrc: null, area_dm2: 0.9, weight_g: 150 },
+  { customer: 'NGF', part_number: 'NGF-SS-0612', revision: 'B', description: 'Socket cap screw M6×12, stainless A2', substrate: 'stainless-304', tensile_mpa: null, hardness_hrc: null, area_dm2: 0.036, weight_g: 3.9 },
 ] as const;
+
+/** What the demo customers say about where parts serve (ISO 9223) and the life they ask. */
+export const DEMO_PART_ENVIRONMENTS = [{ part_number: 'NGF-HX-0816', corrosivity_category: 'C3', design_life_years: 10 }] as const;
 
 export async function seedCoreRecords(db: Kysely<Database>): Promise<void> {
   for (const l of DEMO_LINES) {
     await db.insertInto('lines').values(l).onConflict((oc) => oc.column('name').doUpdateSet({ method: l.method, description: l.description })).execute();
   }
   const lines = new Map((await db.selectFrom('lines').select(['id', 'name']).execute()).map((l) => [l.name, l.id]));
-  for (const { line, ...t } of DEMO_TANKS) {
-    const values = { ...t, line_id: lines.get(line)! };
+  for (const { line, family_settings, made_up_days_ago, ...t } of DEMO_TANKS) {
+    const values = {
+      ...t,
+      line_id: lines.get(line)!,
+      family_settings: JSON.stringify(family_settings ?? {}),
+      made_up_at: made_up_days_ago === undefined ? null : new Date(Date.now() - made_up_days_ago * 86_400_000),
+    };
     await db.insertInto('tanks').values(values).onConflict((oc) => oc.column('code').doUpdateSet(values)).execute();
   }
   for (const f of DEMO_FINISHES) {
     const values = { ...f, process_route: JSON.stringify(f.process_route) };
+    await db.insertInto('finishes').values(values).onConflict((oc) => oc.column('code').doUpdateSet(values)).execute();
+  }
+  for (const f of DEMO_FAMILY_FINISHES) {
+    const values = { ...f, process_route: JSON.stringify(f.process_route), family_params: JSON.stringify(f.family_params) };
     await db.insertInto('finishes').values(values).onConflict((oc) => oc.column('code').doUpdateSet(values)).execute();
   }
   const rates = { ...DEMO_RATES, metal_per_kg_cents: JSON.stringify(DEMO_RATES.metal_per_kg_cents) };
@@ -118,5 +187,8 @@ export async function seedCoreRecords(db: Kysely<Database>): Promise<void> {
       .values(values)
       .onConflict((oc) => oc.columns(['customer_id', 'part_number', 'revision']).doUpdateSet({ ...p, updated_at: sql`now()` }))
       .execute();
+  }
+  for (const e of DEMO_PART_ENVIRONMENTS) {
+    await db.updateTable('parts').set({ corrosivity_category: e.corrosivity_category, design_life_years: e.design_life_years }).where('part_number', '=', e.part_number).execute();
   }
 }

@@ -3,6 +3,7 @@ import type { Database } from '@/db/types';
 import { seedBath } from './bath';
 import { seedBilling } from './billing';
 import { seedCoreRecords } from './core-records';
+import { seedFamilies } from './families';
 import { seedFoundation } from './foundation';
 import { seedQuotes } from './quotes';
 import { seedQuality } from './quality';
@@ -17,6 +18,7 @@ export async function seedDemo(db: Kysely<Database>): Promise<void> {
   await seedQuotes(db);
   await seedQuality(db); // after the orders: measures, bakes, certifies and ships plated lots
   await seedBilling(db); // after the orders: bills shipped work orders
+  await seedFamilies(db); // the other lines' work, after billing so the invoices stay as they were
 }
 
 export { DEMO_PASSWORD, DEMO_USERS, DEMO_CUSTOMERS, DEMO_SHOP } from './foundation';

@@ -17,12 +17,12 @@ const DAY = 86_400_000;
 
 type Line = { part: string; finish: string; quantity: number; basis: PricingBasis };
 
-async function actor(db: Kysely<Database>, email: string): Promise<Actor> {
+export async function actor(db: Kysely<Database>, email: string): Promise<Actor> {
   const u = await db.selectFrom('users').select(['id', 'role', 'customer_id', 'name', 'email']).where('email', '=', email).executeTakeFirstOrThrow();
   return { id: u.id, role: u.role, customerId: u.customer_id, name: u.name, email: u.email };
 }
 
-async function draftQuote(db: Kysely<Database>, estimator: Actor, customerCode: string, lines: Line[], opts: { isRush?: boolean; notes?: string } = {}) {
+export async function draftQuote(db: Kysely<Database>, estimator: Actor, customerCode: string, lines: Line[], opts: { isRush?: boolean; notes?: string } = {}) {
   const customer = await db.selectFrom('customers').select('id').where('code', '=', customerCode).executeTakeFirstOrThrow();
   const q = await createQuote(estimator, { customerId: customer.id, isRush: opts.isRush ?? false, notes: opts.notes ?? '' }, db);
   for (const l of lines) {
@@ -37,7 +37,7 @@ async function draftQuote(db: Kysely<Database>, estimator: Actor, customerCode: 
  * Receives the parts and logs runs that cover them, at the quoted current and a little more or
  * less time than quoted (`timeFactor`), so the job-cost report has real variance to show.
  */
-async function runOrder(db: Kysely<Database>, woId: string, people: { plater: Actor; supervisor: Actor }, opts: { timeFactor: number; endedAt: Date; toPlated: boolean }) {
+export async function runOrder(db: Kysely<Database>, woId: string, people: { plater: Actor; supervisor: Actor }, opts: { timeFactor: number; endedAt: Date; toPlated: boolean }) {
   const wo = await getWorkOrder(woId, db);
   if (!wo) return;
   if (wo.state === 'accepted') {
@@ -74,7 +74,7 @@ async function runOrder(db: Kysely<Database>, woId: string, people: { plater: Ac
  * The business functions stamp records with the real time; the story above happened over weeks.
  * Move creation and state-change times back to match the quote and run dates (demo data only).
  */
-async function backdate(db: Kysely<Database>, quoteIds: string[]): Promise<void> {
+export async function backdate(db: Kysely<Database>, quoteIds: string[]): Promise<void> {
   await sql`update quotes set created_at = coalesce(sent_at, now()) - interval '1 day', updated_at = coalesce(decided_at, sent_at, now())
             where id = any(${quoteIds}::uuid[])`.execute(db);
   await sql`

@@ -76,8 +76,12 @@ export function FinishForm({ defaults, lines, readOnly, units }: Props) {
           {check('isActive', 'Offered on new quotes')}
         </section>
         <section className="grid gap-4 sm:grid-cols-3">
-          <NumberField label="Minimum thickness" name="minThickness" defaultValue={v('minThickness')} errors={e('minThickness')} required hint="On significant surfaces." />
-          <NumberField label="Maximum thickness" name="maxThickness" defaultValue={v('maxThickness')} errors={e('maxThickness')} hint="Optional." />
+          {family.makesCoating ? (
+            <>
+              <NumberField label="Minimum thickness" name="minThickness" defaultValue={v('minThickness')} errors={e('minThickness')} required hint="On significant surfaces." />
+              <NumberField label="Maximum thickness" name="maxThickness" defaultValue={v('maxThickness')} errors={e('maxThickness')} hint="Optional." />
+            </>
+          ) : null}
           <SelectField label="Thickness unit" name="thicknessUnit" defaultValue={v('thicknessUnit')} options={unitOptions(unitsOf('thickness'))} errors={e('thicknessUnit')} />
           {family.usesCurrentDensity ? (
             <>

@@ -6,7 +6,7 @@ import { NumberField, SelectField, TextareaField, TextField } from '@/components
 import { FormMessage } from '@/components/ui/form-message';
 import { SubmitButton } from '@/components/ui/submit-button';
 import { initialFormState } from '@/lib/action-state';
-import { SUBSTRATES, UNITS, type SubstrateId, type UnitSystem } from '@/lib/plating';
+import { CORROSIVITY_CATEGORIES, SUBSTRATES, UNITS, ZINC_LOSS_UM_PER_YEAR, type SubstrateId, type UnitSystem } from '@/lib/plating';
 import { mayNeedReliefBake, RELIEF_BAKE_CAUTION } from '@/lib/parts/embrittlement';
 import { AREA_UNITS, MASS_UNITS } from '@/lib/parts/schemas';
 import type { LengthUnit, ShapeKind } from '@/lib/parts/shapes';
@@ -24,6 +24,8 @@ export type PartFormDefaults = {
   substrate: SubstrateId;
   tensileMpa: string;
   hardnessHrc: string;
+  corrosivityCategory: string;
+  designLifeYears: string;
   weight: string;
   weightUnit: string;
   drawing: { fileId: string; fileName: string };
@@ -82,6 +84,18 @@ export function PartForm({ defaults, customers, unitSystem }: { defaults: PartFo
         <div className="grid grid-cols-2 gap-4">
           <NumberField label="Tensile strength" name="tensileMpa" unit="MPa" value={mpa} onChange={(ev) => setMpa(ev.target.value)} errors={e('tensileMpa')} />
           <NumberField label="Hardness" name="hardnessHrc" unit="HRC" value={hrc} onChange={(ev) => setHrc(ev.target.value)} errors={e('hardnessHrc')} />
+        </div>
+        <div className="grid grid-cols-2 gap-4">
+          <SelectField
+            label="Service environment (ISO 9223)"
+            name="corrosivityCategory"
+            defaultValue={v('corrosivityCategory', defaults.corrosivityCategory)}
+            placeholder="Not stated"
+            options={CORROSIVITY_CATEGORIES.map((c) => ({ value: c, label: `${c} · ${ZINC_LOSS_UM_PER_YEAR[c].name}` }))}
+            hint="Where the customer says the part will serve: zinc quotes and certificates then show the coating's expected life."
+            errors={e('corrosivityCategory')}
+          />
+          <NumberField label="Design life asked" name="designLifeYears" unit="years" defaultValue={v('designLifeYears', defaults.designLifeYears)} errors={e('designLifeYears')} />
         </div>
         {caution ? (
           <Caution kind="high-strength-steel-bake" className="sm:col-span-2">

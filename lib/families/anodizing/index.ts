@@ -91,7 +91,8 @@ function price(input: PricingInput, params: AnodizeParams) {
     figures,
     job: {
       loads, partsPerLoad, loadLimitedBy, averageThicknessUm: targetUm, minimumThicknessUm: finish.minThicknessUm, distributionRatio: finish.distributionRatio,
-      ampHours: lot.ampHours, minutesPerLoad, tankHours, labourHours: (loads * finish.handlingMinutesPerLoad) / 60, metalKg: 0, acKWh, areaPerLotDm2: part.areaDm2 * input.quantity,
+      // Minutes under current; the tank time also holds the seal.
+      ampHours: lot.ampHours, minutesPerLoad: load.minutes, tankHours, labourHours: (loads * finish.handlingMinutesPerLoad) / 60, metalKg: 0, acKWh, areaPerLotDm2: part.areaDm2 * input.quantity,
     },
   });
 }
@@ -101,6 +102,7 @@ export const anodizing: ProcessFamily<AnodizeParams> = {
   label: 'Anodizing',
   // The oxide is aluminium's own: Al → Al³⁺.
   metal: { element: 'Al', charge: 3, label: 'Aluminium (anodic oxide)' },
+  makesCoating: true,
   usesCurrentDensity: true,
   bakeLabel: 'Heat treatment (rarely needed after anodizing)',
   usesEfficiency: false,

@@ -123,6 +123,7 @@ export const electrolessNickel: ProcessFamily<ElectrolessParams> = {
   id: 'electroless_nickel',
   label: 'Electroless nickel',
   metal: { element: 'Ni', charge: 2, label: 'Nickel–phosphorus' },
+  makesCoating: true,
   usesCurrentDensity: false,
   bakeLabel: 'Heat treatment (hardness or embrittlement relief, ASTM B733 classes)',
   usesEfficiency: false,

@@ -39,6 +39,7 @@ export const electroplating: ProcessFamily<ElectroplatingParams> = {
   id: 'electroplating',
   label: 'Electroplating',
   metal: null,
+  makesCoating: true,
   usesCurrentDensity: true,
   bakeLabel: 'Hydrogen-embrittlement relief bake',
   usesEfficiency: true,

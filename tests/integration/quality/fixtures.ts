@@ -2,7 +2,7 @@
 // run, numbered in a range the shop's counter never reaches (W2099-…), so tests never touch
 // another area's records and never assume empty tables.
 import { randomInt } from 'node:crypto';
-import type { Kysely } from 'kysely';
+import { sql, type Kysely } from 'kysely';
 import type { Database, WorkOrderState } from '@/db/types';
 import type { Actor } from '@/lib/quality/access';
 
@@ -23,7 +23,8 @@ export async function createLot(db: Kysely<Database>, opts: LotOptions = {}): Pr
     .selectFrom('parts')
     .select(['id', 'area_dm2'])
     .where('customer_id', '=', customer.id)
-    .orderBy(bake ? 'hardness_hrc' : 'tensile_mpa', bake ? 'desc' : 'asc')
+    // The hardest steel part for a bake lot (parts of no stated hardness last), else the weakest.
+    .orderBy(bake ? sql`hardness_hrc desc nulls last` : sql`tensile_mpa asc nulls last`)
     .executeTakeFirstOrThrow();
   const finish = await db
     .selectFrom('finishes')
