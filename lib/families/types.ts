@@ -8,7 +8,7 @@ import type { CautionKind } from '@/components/ui/caution';
 import type { Hazard } from '@/lib/bath/hazards';
 import type { BathTemplate } from '@/lib/bath/template-types';
 import type { AnalysisMethod } from '@/lib/bath/titration';
-import type { LinePrice, PricingInput } from '@/lib/quotes/pricing';
+import type { FamilyFigure, LinePrice, PricingInput } from '@/lib/quotes/pricing';
 
 export type { ProcessFamilyId };
 
@@ -59,6 +59,26 @@ export type FamilyRunPrediction = {
   outsideWindow: string[];
 };
 
+/** One input of a family's workbench calculator; a quantity is typed in the user's units, stored in SI. */
+export type CalculatorInput = {
+  name: string;
+  label: string;
+  kind: 'number' | 'select';
+  quantity?: 'area' | 'thickness' | 'currentDensity' | 'temperature' | 'volume';
+  unit?: string;
+  options?: readonly { value: string; label: string }[];
+  /** The starting value, in storage units. */
+  initial: number | string;
+  hint?: string;
+};
+
+/** The workbench's quick calculation for a family: what an estimator checks before pricing. */
+export type FamilyCalculator = {
+  title: string;
+  inputs: readonly CalculatorInput[];
+  compute(values: Record<string, number | string>): { figures: FamilyFigure[]; notes: string[] };
+};
+
 export type ProcessFamily<P = Record<string, unknown>> = {
   id: ProcessFamilyId;
   label: string;
@@ -72,6 +92,8 @@ export type ProcessFamily<P = Record<string, unknown>> = {
   form: readonly FamilyFormField[];
   /** What a tank of this family keeps besides its chemistry (make-up nickel, end of life, a measured constant). */
   tankSettings: { schema: z.ZodType<Record<string, unknown>>; fields: readonly FamilyFormField[] } | null;
+  /** The workbench's calculators for this family (zinc life sits with electroplating). */
+  calculators: readonly FamilyCalculator[];
   /** What the finish form calls the heat treatment after the process. */
   bakeLabel: string;
   /** One line on what the family does, for menus and the finish form. */

@@ -5,7 +5,8 @@ import { z } from 'zod';
 import { ANODIZE_720_CONSTANT, anodizeCalc, anodizeDimensionChange, PlatingInputError } from '@/lib/plating';
 import { assembleLinePrice, bakeFor, checkFinishCharges, checkRates, commonComponents, costComponent, type FamilyFigure, type PricingInput } from '@/lib/quotes/pricing';
 import { runArea, thicknessVerdict } from '../run-checks';
-import type { ProcessFamily } from '../types';
+import { num } from '../calculator';
+import type { FamilyCalculator, ProcessFamily } from '../types';
 import { ANODIZE_METHODS, ANODIZE_TEMPLATES } from './bath';
 
 export const SEALS = {
@@ -97,6 +98,35 @@ function price(input: PricingInput, params: AnodizeParams) {
   });
 }
 
+/** Time, current, amp-hours and the size change for one load, as the estimator types it. */
+export const ANODIZE_CALCULATOR = {
+  title: 'Anodizing: one load',
+  inputs: [
+    { name: 'areaDm2', label: 'Area in the load', kind: 'number', quantity: 'area', initial: 20 },
+    { name: 'thicknessUm', label: 'Coating thickness', kind: 'number', quantity: 'thickness', initial: 25 },
+    { name: 'currentDensityAdm2', label: 'Current density', kind: 'number', quantity: 'currentDensity', initial: 1.5 },
+    { name: 'growthFraction', label: 'Share that grows outward', kind: 'number', initial: 0.5, hint: 'Hard coatings about 0.5, Type II about 0.33 (common practice).' },
+    { name: 'rectifierMaxA', label: 'Rectifier rating', kind: 'number', unit: 'A', initial: 1000 },
+    { name: 'constantAminPerDm2PerUm', label: 'Measured constant (empty: the 720 rule)', kind: 'number', unit: 'A·min/dm² per µm', initial: '' },
+  ],
+  compute(v: Record<string, number | string>) {
+    const k = v.constantAminPerDm2PerUm === '' || v.constantAminPerDm2PerUm === undefined ? undefined : num(v.constantAminPerDm2PerUm);
+    const r = anodizeCalc({ areaDm2: num(v.areaDm2), thicknessUm: num(v.thicknessUm), currentDensityAdm2: num(v.currentDensityAdm2), growthFraction: num(v.growthFraction), constantAminPerDm2PerUm: k });
+    const max = num(v.rectifierMaxA);
+    const d = anodizeDimensionChange(r.growthUm);
+    const over = Number.isFinite(max) && max > 0 && r.currentA > max;
+    const figures: FamilyFigure[] = [
+      { key: 'minutes', label: 'Time', value: r.minutes, unit: 'min', digits: 1 },
+      { key: 'current', label: 'Current', value: r.currentA, unit: 'A', digits: 1, ...(over ? { warning: `More than the ${max} A rectifier: split the load.` } : {}) },
+      { key: 'ampHours', label: 'Amp-hours', value: r.ampHours, unit: 'A·h', digits: 2 },
+      { key: 'growth', label: 'Growth per surface', value: d.perSurfaceUm, quantity: 'thickness' },
+      { key: 'penetration', label: 'Penetration', value: r.penetrationUm, quantity: 'thickness' },
+      { key: 'diameter', label: 'Change on a diameter', value: d.onDiameterUm, quantity: 'thickness' },
+    ];
+    return { figures, notes: [k ? 'With the measured constant.' : 'By the 720 rule (3.0512 A·min/dm² per µm): an estimate; alloy and temperature move it.'] };
+  },
+} as const satisfies FamilyCalculator;
+
 export const anodizing: ProcessFamily<AnodizeParams> = {
   id: 'anodizing',
   label: 'Anodizing',
@@ -106,6 +136,7 @@ export const anodizing: ProcessFamily<AnodizeParams> = {
   usesCurrentDensity: true,
   bakeLabel: 'Heat treatment (rarely needed after anodizing)',
   usesEfficiency: false,
+  calculators: [ANODIZE_CALCULATOR],
   tankSettings: {
     schema: z.object({ constantAminPerDm2PerUm: z.coerce.number().positive('The constant must be above 0.').max(100, 'Give it in A·min/dm² per µm (about 3).').optional() }),
     fields: [{ name: 'constantAminPerDm2PerUm', label: 'Measured anodizing constant', kind: 'number', unit: 'A·min/dm² per µm', optional: true, hint: 'From this tank’s own coatings; empty uses the 720 rule (3.0512).' }],

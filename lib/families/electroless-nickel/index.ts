@@ -15,7 +15,8 @@ import {
   type PricingInput,
 } from '@/lib/quotes/pricing';
 import { runArea, thicknessVerdict } from '../run-checks';
-import type { ProcessFamily } from '../types';
+import { num } from '../calculator';
+import type { FamilyCalculator, ProcessFamily } from '../types';
 import { EN_METHODS, EN_TEMPLATES } from './bath';
 
 const paramsSchema = z.object({
@@ -119,6 +120,32 @@ export function b733TypeFor(phosphorusWtPct: number): string | null {
   return null;
 }
 
+/** Time from the bath's rate, nickel consumed and the share of a metal turnover for one job. */
+export const EN_CALCULATOR = {
+  title: 'Electroless nickel: one job',
+  inputs: [
+    { name: 'areaDm2', label: 'Area of the job', kind: 'number', quantity: 'area', initial: 10 },
+    { name: 'thicknessUm', label: 'Deposit thickness', kind: 'number', quantity: 'thickness', initial: 25 },
+    { name: 'depositionRateUmPerH', label: 'Deposition rate (µm per hour)', kind: 'number', unit: 'µm/h', initial: 15 },
+    { name: 'phosphorusWtPct', label: 'Phosphorus', kind: 'number', unit: '%', initial: 8 },
+    { name: 'bathVolumeL', label: 'Bath volume', kind: 'number', quantity: 'volume', initial: 100 },
+    { name: 'nickelMakeUpGPerL', label: 'Nickel at make-up', kind: 'number', unit: 'g/L', initial: 6 },
+  ],
+  compute(v: Record<string, number | string>) {
+    const r = electrolessCalc({ areaDm2: num(v.areaDm2), thicknessUm: num(v.thicknessUm), depositionRateUmPerH: num(v.depositionRateUmPerH), phosphorusWtPct: num(v.phosphorusWtPct), bathVolumeL: num(v.bathVolumeL), nickelMakeUpGPerL: num(v.nickelMakeUpGPerL) });
+    const type = b733TypeFor(num(v.phosphorusWtPct));
+    const figures: FamilyFigure[] = [
+      { key: 'minutes', label: 'Time in the bath', value: r.minutes, unit: 'min', digits: 1 },
+      { key: 'deposit', label: 'Deposit', value: r.depositMassG, quantity: 'mass' },
+      { key: 'nickel', label: 'Nickel consumed', value: r.nickelConsumedG, quantity: 'mass' },
+      { key: 'phosphorus', label: 'Phosphorus in it', value: r.phosphorusG, quantity: 'mass' },
+      { key: 'mto', label: 'Share of a metal turnover', value: r.metalTurnovers, unit: 'MTO', digits: 4 },
+      { key: 'density', label: 'Density (from the phosphorus)', value: r.densityGPerCm3, unit: 'g/cm³', digits: 2 },
+    ];
+    return { figures, notes: [type ? `ASTM B733 Type ${type} by phosphorus (from memory).` : 'No B733 type for this phosphorus.', 'The density table is from memory; the bath supplier’s figure governs.'] };
+  },
+} as const satisfies FamilyCalculator;
+
 export const electrolessNickel: ProcessFamily<ElectrolessParams> = {
   id: 'electroless_nickel',
   label: 'Electroless nickel',
@@ -127,6 +154,7 @@ export const electrolessNickel: ProcessFamily<ElectrolessParams> = {
   usesCurrentDensity: false,
   bakeLabel: 'Heat treatment (hardness or embrittlement relief, ASTM B733 classes)',
   usesEfficiency: false,
+  calculators: [EN_CALCULATOR],
   tankSettings: {
     schema: enTankSettingsSchema,
     fields: [

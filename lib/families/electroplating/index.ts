@@ -2,12 +2,23 @@
 // finishes also show the coating's expected life where the customer states the environment.
 import { z } from 'zod';
 import { predictRun } from '@/lib/orders/run-math';
-import { describeZincLife, PlatingInputError, ZINC_LIFE_STANDARD, zincServiceLife, zincThicknessForLife, type CorrosivityCategory } from '@/lib/plating';
+import {
+  CORROSIVITY_CATEGORIES,
+  describeZincLife,
+  isCorrosivityCategory,
+  PlatingInputError,
+  ZINC_LIFE_STANDARD,
+  ZINC_LOSS_UM_PER_YEAR,
+  zincServiceLife,
+  zincThicknessForLife,
+  type CorrosivityCategory,
+} from '@/lib/plating';
 import { priceLine, type FamilyFigure, type PricingInput } from '@/lib/quotes/pricing';
 import { NICKEL_COPPER_TEMPLATES } from '@/lib/bath/templates-nickel-copper';
 import { OTHER_TEMPLATES } from '@/lib/bath/templates-other';
 import { ZINC_TIN_TEMPLATES } from '@/lib/bath/templates-zinc-tin';
-import type { ProcessFamily } from '../types';
+import { num } from '../calculator';
+import type { FamilyCalculator, ProcessFamily } from '../types';
 
 const paramsSchema = z.object({
   // Hours of ASTM B117 neutral salt spray the customer asks of a zinc finish with its conversion coating.
@@ -35,6 +46,21 @@ export function zincLifeFigures(minThicknessUm: number, category: CorrosivityCat
   return figures;
 }
 
+/** Zinc's expected life in an ISO 9223 category, and the zinc a design life needs. */
+export const ZINC_LIFE_CALCULATOR = {
+  title: 'Zinc coating life',
+  inputs: [
+    { name: 'thicknessUm', label: 'Zinc thickness', kind: 'number', quantity: 'thickness', initial: 8 },
+    { name: 'category', label: 'Environment (ISO 9223)', kind: 'select', options: CORROSIVITY_CATEGORIES.map((c) => ({ value: c, label: `${c} · ${ZINC_LOSS_UM_PER_YEAR[c].name}` })), initial: 'C3' },
+    { name: 'years', label: 'Design life asked', kind: 'number', unit: 'years', initial: 10 },
+  ],
+  compute(v: Record<string, number | string>) {
+    const category = String(v.category);
+    if (!isCorrosivityCategory(category)) throw new PlatingInputError('category', 'Choose an ISO 9223 category.');
+    return { figures: zincLifeFigures(num(v.thicknessUm), category, num(v.years)), notes: [LIFE_DISCLAIMER] };
+  },
+} as const satisfies FamilyCalculator;
+
 export const electroplating: ProcessFamily<ElectroplatingParams> = {
   id: 'electroplating',
   label: 'Electroplating',
@@ -43,6 +69,7 @@ export const electroplating: ProcessFamily<ElectroplatingParams> = {
   usesCurrentDensity: true,
   bakeLabel: 'Hydrogen-embrittlement relief bake',
   usesEfficiency: true,
+  calculators: [ZINC_LIFE_CALCULATOR],
   tankSettings: null,
   form: [{ name: 'saltSprayHours', label: 'Salt-spray hours the customer asks (ASTM B117)', kind: 'number', unit: 'h', optional: true, hint: 'Zinc with a conversion coating: leave empty if no salt-spray test is asked.' }],
   summary: 'Metal deposited by current: amp-hours, time and metal from Faraday’s law.',

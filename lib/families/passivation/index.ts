@@ -5,7 +5,8 @@ import { z } from 'zod';
 import { checkPassivation, DEFAULT_PASSIVATION_WINDOWS, PlatingInputError, type PassivationWindow } from '@/lib/plating';
 import { assembleLinePrice, bakeFor, checkFinishCharges, checkRates, commonComponents, type FamilyFigure, type PricingInput } from '@/lib/quotes/pricing';
 import { runArea } from '../run-checks';
-import type { ProcessFamily } from '../types';
+import { num } from '../calculator';
+import type { FamilyCalculator, ProcessFamily } from '../types';
 import { PASSIVATION_METHODS, PASSIVATION_TEMPLATES } from './bath';
 
 /** ASTM A967's verification practices (names as the standard gives them). */
@@ -67,6 +68,28 @@ function price(input: PricingInput, params: PassivationParams) {
   });
 }
 
+/** A lot's time, temperature and concentration against its treatment, and the tank it occupies. */
+export const PASSIVATION_CALCULATOR = {
+  title: 'Passivation: one lot',
+  inputs: [
+    { name: 'windowId', label: 'Treatment', kind: 'select', options: DEFAULT_PASSIVATION_WINDOWS.map((w) => ({ value: w.id, label: `${w.standard} ${w.treatment}` })), initial: 'a967-nitric-2' },
+    { name: 'temperatureC', label: 'Bath temperature', kind: 'number', quantity: 'temperature', initial: 27 },
+    { name: 'minutes', label: 'Immersion', kind: 'number', unit: 'min', initial: 30 },
+    { name: 'concentration', label: 'Acid concentration', kind: 'number', unit: '%', initial: 25 },
+    { name: 'loads', label: 'Loads in the lot', kind: 'number', unit: 'loads', initial: 4 },
+  ],
+  compute(v: Record<string, number | string>) {
+    const verdict = checkPassivation({ windowId: String(v.windowId), temperatureC: num(v.temperatureC), minutes: num(v.minutes), concentration: num(v.concentration) });
+    const loads = num(v.loads);
+    if (!(loads >= 1) || !Number.isInteger(loads)) throw new PlatingInputError('loads', 'Loads must be a whole number of at least 1.');
+    const figures: FamilyFigure[] = [
+      { key: 'verdict', label: 'Window', value: verdict.ok ? `Inside ${verdict.window.standard} ${verdict.window.treatment}` : 'Outside the window', ...(verdict.ok ? {} : { warning: verdict.broken.join(' ') }) },
+      { key: 'occupancy', label: 'Tank occupied', value: (loads * num(v.minutes)) / 60, unit: 'tank-h', digits: 2 },
+    ];
+    return { figures, notes: [verdict.window.source] };
+  },
+} as const satisfies FamilyCalculator;
+
 export const passivation: ProcessFamily<PassivationParams> = {
   id: 'passivation',
   label: 'Passivation',
@@ -76,6 +99,7 @@ export const passivation: ProcessFamily<PassivationParams> = {
   usesCurrentDensity: false,
   bakeLabel: 'Heat treatment (not usual after passivation)',
   usesEfficiency: false,
+  calculators: [PASSIVATION_CALCULATOR],
   tankSettings: null,
   form: [
     { name: 'windowId', label: 'Treatment', kind: 'select', options: DEFAULT_PASSIVATION_WINDOWS.map((w) => ({ value: w.id, label: `${w.standard} ${w.treatment}` })) },

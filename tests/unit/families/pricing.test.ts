@@ -1,7 +1,7 @@
 // Each process family's price and figures, checked by hand from the engine's own sources (the 720
 // rule, the electroless mass balance, ASTM A967 windows, ISO 9223 zinc rates).
 import { describe, expect, it } from 'vitest';
-import { getFamily, priceFinishLine } from '@/lib/families';
+import { FAMILIES, getFamily, priceFinishLine } from '@/lib/families';
 import { zincLifeFigures } from '@/lib/families/electroplating';
 import { PlatingInputError } from '@/lib/plating';
 import type { PricingInput } from '@/lib/quotes/pricing';
@@ -158,5 +158,33 @@ describe('the registry', () => {
     expect(getFamily('anodizing').cautions({ coatingType: 'II', growthFraction: 0.3, seal: 'dichromate', sealMinutes: 15 } as never)).toContain('hexavalent-chromium');
     expect(getFamily('electroless_nickel').cautions({} as never)).toEqual(['nickel', 'heat']);
     expect(getFamily('passivation').cautions({ windowId: 'a967-nitric-2' } as never)).toContain('nitric-acid');
+  });
+});
+
+describe('the workbench calculators', () => {
+  const calc = (title: string) => FAMILIES.flatMap((f) => f.calculators).find((c) => c.title === title)!;
+  const start = (title: string) => Object.fromEntries(calc(title).inputs.map((i) => [i.name, i.initial]));
+
+  it('anodizing: 25 µm at 1.5 A/dm² on 20 dm² is 50.85 min at 30 A (720 rule, reference sheet)', () => {
+    const r = calc('Anodizing: one load').compute(start('Anodizing: one load'));
+    expect(r.figures.find((f) => f.key === 'minutes')!.value as number).toBeCloseTo(50.85, 2);
+    expect(r.figures.find((f) => f.key === 'current')!.value).toBe(30);
+    const over = calc('Anodizing: one load').compute({ ...start('Anodizing: one load'), rectifierMaxA: 20 });
+    expect(over.figures.find((f) => f.key === 'current')!.warning).toMatch(/split the load/);
+  });
+
+  it('electroless nickel: the worked check, 10 dm² at 25 µm, 8 % P → 0.0303 MTO in 100 L at 6 g/L (density from the table, from memory)', () => {
+    const r = calc('Electroless nickel: one job').compute(start('Electroless nickel: one job'));
+    // 8 % P → 7.955 g/cm³ from the table (between 3 % / 8.5 and 8.5 % / 7.9): 2.5 cm³ × 7.955 × 0.92 = 18.30 g Ni.
+    expect(r.figures.find((f) => f.key === 'nickel')!.value as number).toBeCloseTo(2.5 * (8.5 - (0.6 * 5) / 5.5) * 0.92, 6);
+    expect(r.figures.find((f) => f.key === 'minutes')!.value as number).toBeCloseTo(100, 9);
+  });
+
+  it('refuses bad input with the engine’s own field', () => {
+    expect(() => calc('Electroless nickel: one job').compute({ ...start('Electroless nickel: one job'), phosphorusWtPct: 40 })).toThrow(PlatingInputError);
+    const e = catchError(() => calc('Passivation: one lot').compute({ ...start('Passivation: one lot'), loads: 0.5 })) as PlatingInputError;
+    expect(e.field).toBe('loads');
+    const z = calc('Zinc coating life').compute(start('Zinc coating life'));
+    expect(z.figures[0]!.value).toBe('3.8 to 11.4 years');
   });
 });

@@ -5,6 +5,7 @@ import { FormMessage } from '@/components/ui/form-message';
 import { PageHeader } from '@/components/ui/page-header';
 import { requirePageUser } from '@/lib/auth/current-user';
 import { findProcessLibrary, findRecentCalculations, getCalculation } from '@/lib/estimating/queries';
+import { FamilyCalculators } from './family-calculators';
 import { RecentCalculations } from './recent-calculations';
 import { Workbench } from './workbench';
 
@@ -30,6 +31,9 @@ export default async function WorkbenchPage({ searchParams }: { searchParams: Pr
         <FormMessage tone="error" message="This calculation was saved in a form the workbench can no longer read; starting from the defaults instead." />
       ) : null}
       <Workbench key={saved?.id ?? 'new'} system={user.unitSystem} library={library} initial={saved?.input ?? null} initialTitle={saved?.title ?? null} />
+      <Card title="Other lines" description="Anodizing, electroless nickel, passivation and zinc life: the figures each process needs, in your units. Quotes price them from the finish and the tank.">
+        <FamilyCalculators system={user.unitSystem} />
+      </Card>
       <Card title="Recent calculations" description="Open one to see it again in the workbench, in your units." padding="none">
         <RecentCalculations rows={recent} system={user.unitSystem} />
       </Card>
