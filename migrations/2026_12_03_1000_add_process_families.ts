@@ -33,7 +33,9 @@ export async function up(db: Kysely<any>): Promise<void> {
     alter table plating_runs
       alter column amp_hours drop not null,
       -- bath conditions of a run without current, e.g. { "temperatureC": 25, "concentration": 30 }
-      add column conditions jsonb not null default '{}'::jsonb;
+      add column conditions jsonb not null default '{}'::jsonb,
+      -- a run judged by a window (passivation) that fell outside it
+      add column is_outside_window boolean not null default false;
     alter table plating_runs drop constraint plating_runs_amp_hours_check;
     alter table plating_runs add constraint plating_runs_amp_hours_check check (amp_hours is null or amp_hours > 0);
 

@@ -101,6 +101,7 @@ export type PlatingRunsTable = {
   amp_hours: NumericNullable;
   /** Bath conditions of a run without current, e.g. temperature and concentration. */
   conditions: Json<Record<string, number>>;
+  is_outside_window: Generated<boolean>;
   loads: number;
   parts_per_load: number;
   predicted_thickness_um: Numeric;

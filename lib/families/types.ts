@@ -84,6 +84,8 @@ export type ProcessFamily<P = Record<string, unknown>> = {
   label: string;
   /** The metal the finish is about when the family fixes it (null: the estimator picks one). */
   metal: { element: string; charge: number; label: string } | null;
+  /** The thickness method a reading starts from (ASTM B499 magnetic, B244 eddy current, B568 X-ray). */
+  thicknessMethod: 'B499' | 'B244' | 'B568' | null;
   /** Whether the process leaves a coating with a thickness (passivation does not). */
   makesCoating: boolean;
   /** Whether the finish carries a current density (and a cathode efficiency, for plating). */

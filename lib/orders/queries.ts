@@ -93,7 +93,7 @@ export async function findPlatingRuns(workOrderId: string, conn: Db = defaultDb)
     .leftJoin('users as u', 'u.id', 'r.logged_by')
     .select([
       'r.id', 'r.started_at', 'r.ended_at', 'r.current_a', 'r.meter_start_ah', 'r.meter_stop_ah', 'r.amp_hours', 'r.loads', 'r.parts_per_load',
-      'r.predicted_thickness_um', 'r.is_below_minimum', 't.code as tank_code', 't.name as tank_name', 't.efficiency as tank_efficiency',
+      'r.predicted_thickness_um', 'r.is_below_minimum', 'r.is_outside_window', 'r.conditions', 't.code as tank_code', 't.name as tank_name', 't.efficiency as tank_efficiency',
       't.template_id', 'u.name as logged_by_name',
     ])
     .where('r.work_order_id', '=', workOrderId)

@@ -147,6 +147,7 @@ export async function logPlatingRun(actor: Actor, input: RunInput, conn: Db = de
         parts_per_load: input.partsPerLoad,
         predicted_thickness_um: prediction.averageThicknessUm,
         is_below_minimum: prediction.isBelowMinimum,
+        is_outside_window: prediction.outsideWindow.length > 0,
         logged_by: actor.id,
         idempotency_key: input.idempotencyKey,
       })

@@ -26,10 +26,14 @@ export const logRunAction = formAction('runs.log', runSchema, async (input, user
   revalidatePath(at(input.workOrderId));
   if (run.duplicate) return { ok: true, message: 'This run was already saved; nothing was added twice.' };
   const p = run.prediction;
+  if (p?.outsideWindow.length) {
+    return { ok: true, message: `Run saved as it was. It was outside the process window (${p.outsideWindow.join(' ')}), so a nonconformance is open for quality.` };
+  }
   return {
     ok: true,
-    message: p
-      ? `Run saved: about ${formatStoredQuantity(p.averageThicknessUm, 'thickness', user.unitSystem)} average, ${formatStoredQuantity(p.minimumThicknessUm, 'thickness', user.unitSystem)} on the thinnest significant surface.`
-      : 'Run saved.',
+    message:
+      p && p.averageThicknessUm > 0
+        ? `Run saved: about ${formatStoredQuantity(p.averageThicknessUm, 'thickness', user.unitSystem)} average, ${formatStoredQuantity(p.minimumThicknessUm, 'thickness', user.unitSystem)} on the thinnest significant surface.`
+        : 'Run saved: inside the process window.',
   };
 });

@@ -132,6 +132,7 @@ export const anodizing: ProcessFamily<AnodizeParams> = {
   label: 'Anodizing',
   // The oxide is aluminium's own: Al → Al³⁺.
   metal: { element: 'Al', charge: 3, label: 'Aluminium (anodic oxide)' },
+  thicknessMethod: 'B244',
   makesCoating: true,
   usesCurrentDensity: true,
   bakeLabel: 'Heat treatment (rarely needed after anodizing)',

@@ -150,6 +150,7 @@ export const electrolessNickel: ProcessFamily<ElectrolessParams> = {
   id: 'electroless_nickel',
   label: 'Electroless nickel',
   metal: { element: 'Ni', charge: 2, label: 'Nickel–phosphorus' },
+  thicknessMethod: 'B568',
   makesCoating: true,
   usesCurrentDensity: false,
   bakeLabel: 'Heat treatment (hardness or embrittlement relief, ASTM B733 classes)',

@@ -65,6 +65,7 @@ export const electroplating: ProcessFamily<ElectroplatingParams> = {
   id: 'electroplating',
   label: 'Electroplating',
   metal: null,
+  thicknessMethod: 'B499',
   makesCoating: true,
   usesCurrentDensity: true,
   bakeLabel: 'Hydrogen-embrittlement relief bake',

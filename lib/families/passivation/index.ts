@@ -95,6 +95,7 @@ export const passivation: ProcessFamily<PassivationParams> = {
   label: 'Passivation',
   // No metal is deposited; the passive film is chromium-rich oxide on the stainless steel.
   metal: { element: 'Cr', charge: 3, label: 'Stainless steel (passive film)' },
+  thicknessMethod: null,
   makesCoating: false,
   usesCurrentDensity: false,
   bakeLabel: 'Heat treatment (not usual after passivation)',

@@ -12,6 +12,7 @@ import { Table, TBody, Td, Th, THead, Tr } from '@/components/ui/table';
 import { can, requirePageUser } from '@/lib/auth/current-user';
 import { getJobCost } from '@/lib/orders/job-cost';
 import { findPlatingRuns, findWorkOrderEvents, getWorkOrder } from '@/lib/orders/queries';
+import { getFamily } from '@/lib/families';
 import { nextState, STATE_LABELS, WORK_ORDER_STATES } from '@/lib/orders/states';
 import { formatNumber, formatStoredQuantity } from '@/lib/plating';
 import { BASIS_LABELS } from '@/lib/quotes/basis';
@@ -32,6 +33,8 @@ export default async function WorkOrderPage({ params }: { params: Promise<{ work
   if (!wo) notFound();
   const [events, runs, cost] = await Promise.all([findWorkOrderEvents(wo.id), findPlatingRuns(wo.id), can(user, 'reports.read') ? getJobCost(wo.id) : null]);
   const next = nextState(wo.state, wo.bake_required);
+  const family = getFamily(wo.family);
+  const runsWithCurrent = family.runsWithCurrent;
   const units = user.unitSystem;
   const mayLog = can(user, 'runs.log') && (wo.state === 'received' || wo.state === 'in_process');
   const dueIso = wo.due_date ? wo.due_date.toISOString().slice(0, 10) : null;
@@ -53,7 +56,7 @@ export default async function WorkOrderPage({ params }: { params: Promise<{ work
           <>
             {mayLog ? (
               <LinkButton href={`/work-orders/${wo.id}/log-run`} size="lg">
-                Log a plating run
+                {runsWithCurrent ? 'Log a plating run' : 'Log a run'}
               </LinkButton>
             ) : null}
             <a className={buttonClasses({ variant: 'secondary' })} href={`/api/work-orders/${wo.id}/traveler`} target="_blank" rel="noopener">
@@ -79,8 +82,12 @@ export default async function WorkOrderPage({ params }: { params: Promise<{ work
               {wo.finish_code} · {wo.finish_name}
               {wo.spec_text ? <div className="text-xs text-ink-muted">{wo.spec_text}</div> : null}
             </dd>
-            <dt className="text-ink-muted">Minimum thickness</dt>
-            <dd>{formatStoredQuantity(wo.min_thickness_um, 'thickness', units)} on significant surfaces</dd>
+            {family.makesCoating ? (
+              <>
+                <dt className="text-ink-muted">Minimum thickness</dt>
+                <dd>{formatStoredQuantity(wo.min_thickness_um, 'thickness', units)} on significant surfaces</dd>
+              </>
+            ) : null}
             <dt className="text-ink-muted">Quantity</dt>
             <dd className="tabular">
               {wo.quantity_ordered.toLocaleString('en-US')} ordered · {wo.quantity_received.toLocaleString('en-US')} received · {wo.quantity_shipped.toLocaleString('en-US')} shipped
@@ -120,7 +127,7 @@ export default async function WorkOrderPage({ params }: { params: Promise<{ work
 
       {wo.bake_required ? <Caution kind="high-strength-steel-bake" /> : null}
 
-      <Card title="Plating runs" padding="none" actions={mayLog ? <LinkButton href={`/work-orders/${wo.id}/log-run`} variant="secondary" size="sm">Log a run</LinkButton> : null}>
+      <Card title={runsWithCurrent ? 'Plating runs' : 'Runs'} padding="none" actions={mayLog ? <LinkButton href={`/work-orders/${wo.id}/log-run`} variant="secondary" size="sm">Log a run</LinkButton> : null}>
         {runs.length === 0 ? (
           <p className="p-4 text-sm text-ink-muted">No runs logged yet.</p>
         ) : (
@@ -132,7 +139,7 @@ export default async function WorkOrderPage({ params }: { params: Promise<{ work
                 <Th numeric>Current</Th>
                 <Th numeric>Amp-hours</Th>
                 <Th numeric>Loads × parts</Th>
-                <Th numeric>Predicted average</Th>
+                <Th numeric>{family.makesCoating ? 'Predicted average' : 'Bath'}</Th>
                 <Th>Verdict</Th>
                 <Th>Logged by</Th>
               </tr>
@@ -147,8 +154,22 @@ export default async function WorkOrderPage({ params }: { params: Promise<{ work
                   <Td numeric>
                     {r.loads} × {r.parts_per_load}
                   </Td>
-                  <Td numeric>{formatStoredQuantity(r.predicted_thickness_um, 'thickness', units)}</Td>
-                  <Td>{r.is_below_minimum ? <StatusBadge status="out" label="Below minimum" size="sm" /> : <StatusBadge status="ok" label="Meets minimum" size="sm" />}</Td>
+                  <Td numeric>
+                    {family.makesCoating
+                      ? formatStoredQuantity(r.predicted_thickness_um, 'thickness', units)
+                      : [r.conditions.temperatureC !== undefined ? formatStoredQuantity(r.conditions.temperatureC, 'temperature', units) : null, r.conditions.concentration !== undefined ? `${r.conditions.concentration} %` : null].filter(Boolean).join(' · ') || '—'}
+                  </Td>
+                  <Td>
+                    {r.is_outside_window ? (
+                      <StatusBadge status="out" label="Outside the window" size="sm" />
+                    ) : !family.makesCoating ? (
+                      <StatusBadge status="ok" label="Inside the window" size="sm" />
+                    ) : r.is_below_minimum ? (
+                      <StatusBadge status="out" label="Below minimum" size="sm" />
+                    ) : (
+                      <StatusBadge status="ok" label="Meets minimum" size="sm" />
+                    )}
+                  </Td>
                   <Td>{r.logged_by_name ?? '—'}</Td>
                 </Tr>
               ))}

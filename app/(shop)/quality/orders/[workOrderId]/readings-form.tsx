@@ -19,12 +19,12 @@ const inputClass = 'min-h-target w-full rounded-md border border-surface-line bg
  * Hand entry at the bench: one row per sampled part, already numbered, big enough for gloves.
  * The rows travel as one JSON field; the server checks each and answers per row.
  */
-export function ReadingsForm(props: { workOrderId: string; firstPartNo: number; rows: number; unit: string; minimumText: string }) {
+export function ReadingsForm(props: { workOrderId: string; firstPartNo: number; rows: number; unit: string; minimumText: string; defaultMethod: string }) {
   const [state, action] = useActionState(recordReadingsAction, initialFormState);
   const [rows, setRows] = useState<Row[]>(() =>
     Array.from({ length: Math.max(1, Math.min(props.rows, MAX_ROWS)) }, (_, i) => ({ partNo: String(props.firstPartNo + i), location: 'significant surface', thickness: '' })),
   );
-  const [method, setMethod] = useState('B499');
+  const [method, setMethod] = useState(props.defaultMethod);
   // Once a batch is saved (passing or not), clear the values and number on from the last part. A
   // refusal comes back with the submitted `values` (lib/action.ts) and keeps what was typed.
   useEffect(() => {

@@ -6,6 +6,7 @@ import { lotEfficiency } from '@/lib/quality/efficiency';
 import type { ThicknessState } from '@/lib/quality/lot-checks';
 import type { LotRecord } from '@/lib/quality/lot-types';
 import { CsvForm } from './csv-form';
+import { lotFamily } from '@/lib/quality/lot-checks';
 import { ReadingsForm } from './readings-form';
 import { ReadingsTable } from './readings-table';
 
@@ -84,7 +85,7 @@ export function ThicknessCard({ lot, t, units, tz, canRecord, canVoid, open }: P
             <section aria-label="Enter readings by hand" className="rounded-md border border-surface-line p-3">
               <h3 className="font-medium">Enter readings by hand</h3>
               <div className="pt-3">
-                <ReadingsForm workOrderId={lot.order.id} firstPartNo={firstPart} rows={remaining} unit={unit} minimumText={q(f.minThicknessUm)} />
+                <ReadingsForm workOrderId={lot.order.id} firstPartNo={firstPart} rows={remaining} unit={unit} minimumText={q(f.minThicknessUm)} defaultMethod={lotFamily(lot).family.thicknessMethod ?? 'B499'} />
               </div>
             </section>
             <details className="rounded-md border border-surface-line p-3">
