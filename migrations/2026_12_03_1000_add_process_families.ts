@@ -44,7 +44,9 @@ export async function up(db: Kysely<any>): Promise<void> {
       add column corrosivity_category text
         check (corrosivity_category is null or corrosivity_category in ('C1', 'C2', 'C3', 'C4', 'C5', 'CX')),
       -- the service life the customer asks the coating to give, in years
-      add column design_life_years numeric check (design_life_years is null or (design_life_years > 0 and design_life_years <= 200));
+      add column design_life_years numeric check (design_life_years is null or (design_life_years > 0 and design_life_years <= 200)),
+      -- the drawing's tolerance on a finished diameter (±, µm), to weigh a coating's growth against
+      add column size_tolerance_um numeric check (size_tolerance_um is null or (size_tolerance_um > 0 and size_tolerance_um < 100000));
 
     -- A lot's quality records of the families' own kinds (seal test, phosphorus content,
     -- passivation conditions and verification, salt spray). Never edited: a correction voids the

@@ -82,6 +82,7 @@ export type PartsTable = {
   updated_at: GeneratedTimestamp;
   corrosivity_category: 'C1' | 'C2' | 'C3' | 'C4' | 'C5' | 'CX' | null;
   design_life_years: NumericNullable;
+  size_tolerance_um: NumericNullable;
 };
 
 export type ProcessStep = { step: string; note?: string };

@@ -16,6 +16,7 @@ type Saved = {
   hardness_hrc: number | null;
   corrosivity_category: string | null;
   design_life_years: number | null;
+  size_tolerance_um: number | null;
   area_dm2: number;
   weight_g: number | null;
   drawing_file_id: string | null;
@@ -47,6 +48,8 @@ export function partFormDefaults(part: Saved | null, system: UnitSystem, custome
     hardnessHrc: text(part?.hardness_hrc ?? null),
     corrosivityCategory: part?.corrosivity_category ?? '',
     designLifeYears: text(part?.design_life_years ?? null),
+    sizeTolerance: part?.size_tolerance_um ? shown(fromStorage(part.size_tolerance_um, system === 'us' ? 'mil' : 'um')) : '',
+    sizeToleranceUnit: system === 'us' ? 'mil' : 'um',
     weight: part?.weight_g ? shown(fromStorage(part.weight_g, massUnit)) : '',
     weightUnit: massUnit,
     drawing: { fileId: part?.drawing_file_id ?? '', fileName: part?.drawing_name ?? '' },

@@ -1,4 +1,5 @@
 import 'server-only';
+import { toStorage } from '@/lib/plating';
 import { type Kysely, sql } from 'kysely';
 import { db, type Database } from '@/db';
 import type { SessionUser } from '@/lib/auth/current-user';
@@ -66,6 +67,7 @@ export async function savePart(actor: SessionUser, input: PartInput, q: Kysely<D
       hardness_hrc: input.hardnessHrc,
       corrosivity_category: input.corrosivityCategory,
       design_life_years: input.designLifeYears,
+      size_tolerance_um: input.sizeTolerance === null ? null : toStorage(input.sizeTolerance, input.sizeToleranceUnit),
       area_dm2: measured.areaDm2,
       weight_g: partWeightG(input, measured.volumeCm3, input.substrate),
       calculation_id: calculationId,

@@ -24,6 +24,7 @@ export async function getPart(partId: string) {
       'p.hardness_hrc',
       'p.corrosivity_category',
       'p.design_life_years',
+      'p.size_tolerance_um',
       'p.area_dm2',
       'p.weight_g',
       'p.drawing_file_id',

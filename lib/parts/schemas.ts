@@ -24,6 +24,9 @@ export const partFields = {
   // Where the customer says the part will serve (ISO 9223), and the life they ask of the coating.
   corrosivityCategory: z.preprocess((v) => (v === '' || v === undefined ? null : v), z.enum(CORROSIVITY_CATEGORIES, { error: 'Choose an ISO 9223 category.' }).nullable()).default(null),
   designLifeYears: optionalNumberField('the design life', { positive: true, max: 200 }).default(null),
+  // ± on a finished diameter, in the form's thickness unit (µm or mil); stored in µm.
+  sizeTolerance: optionalNumberField('the size tolerance', { positive: true, max: 99999 }).default(null),
+  sizeToleranceUnit: z.enum(['um', 'mil'], { error: 'Choose µm or mil.' }).default('um'),
 };
 
 export type PartArea =

@@ -93,7 +93,7 @@ export async function priceRequest(conn: Db, req: LineRequest): Promise<PricedLi
     const input: PricingInput = {
       part: {
         areaDm2: part.area_dm2, weightG: part.weight_g, hardnessHrc: part.hardness_hrc, tensileMpa: part.tensile_mpa,
-        corrosivityCategory: part.corrosivity_category, designLifeYears: part.design_life_years,
+        corrosivityCategory: part.corrosivity_category, designLifeYears: part.design_life_years, sizeToleranceUm: part.size_tolerance_um,
       },
       finish: {
         family: finish.family,

@@ -19,6 +19,8 @@ export type PricedPart = {
   /** The environment the customer states (ISO 9223), and the life asked for, where given. */
   corrosivityCategory?: CorrosivityCategory | null;
   designLifeYears?: number | null;
+  /** ± on a finished diameter, µm, from the drawing. */
+  sizeToleranceUm?: number | null;
 };
 
 export type PricedFinish = {

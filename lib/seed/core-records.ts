@@ -153,6 +153,11 @@ export const DEMO_PARTS = [
 
 /** What the demo customers say about where parts serve (ISO 9223) and the life they ask. */
 export const DEMO_PART_ENVIRONMENTS = [{ part_number: 'NGF-HX-0816', corrosivity_category: 'C3', design_life_years: 10 }] as const;
+/** The drawing's tolerance on a finished diameter (±, µm) of the parts that are anodized. */
+export const DEMO_PART_TOLERANCES = [
+  { part_number: 'HV-PST-7075', size_tolerance_um: 25 },
+  { part_number: 'HV-ACT-6061', size_tolerance_um: 50 },
+] as const;
 
 export async function seedCoreRecords(db: Kysely<Database>): Promise<void> {
   for (const l of DEMO_LINES) {
@@ -187,6 +192,9 @@ export async function seedCoreRecords(db: Kysely<Database>): Promise<void> {
       .values(values)
       .onConflict((oc) => oc.columns(['customer_id', 'part_number', 'revision']).doUpdateSet({ ...p, updated_at: sql`now()` }))
       .execute();
+  }
+  for (const t of DEMO_PART_TOLERANCES) {
+    await db.updateTable('parts').set({ size_tolerance_um: t.size_tolerance_um }).where('part_number', '=', t.part_number).execute();
   }
   for (const e of DEMO_PART_ENVIRONMENTS) {
     await db.updateTable('parts').set({ corrosivity_category: e.corrosivity_category, design_life_years: e.design_life_years }).where('part_number', '=', e.part_number).execute();

@@ -67,7 +67,7 @@ const WALKS: Walk[] = [
     refusal: /The phosphorus content has not been recorded\./,
     records: async (p) => {
       const section = p.getByRole('region', { name: 'Phosphorus content' });
-      await section.getByLabel('Phosphorus', { exact: true }).fill('8.2');
+      await section.getByLabel(/^Phosphorus/).fill('8.2');
       await section.getByRole('button', { name: 'Record' }).click();
       await p.getByText('Phosphorus content recorded: passes.').waitFor();
     },
@@ -89,8 +89,8 @@ const WALKS: Walk[] = [
     refusal: /The seal quality test has not been recorded\./,
     records: async (p) => {
       const section = p.getByRole('region', { name: 'Seal quality test' });
-      await section.getByLabel('Result', { exact: true }).fill('1');
-      await section.getByLabel('Limit in the specification').fill('2');
+      await section.getByLabel(/^Result/).fill('1');
+      await section.getByLabel(/^Limit in the specification/).fill('2');
       await section.getByRole('button', { name: 'Record' }).click();
       await p.getByText('Seal quality test recorded: passes.').waitFor();
     },
@@ -111,7 +111,7 @@ const WALKS: Walk[] = [
     refusal: /The passivation verification test has not been recorded\./,
     records: async (p) => {
       const section = p.getByRole('region', { name: 'Passivation verification test' });
-      await section.getByLabel('Result', { exact: true }).selectOption('pass');
+      await section.getByLabel(/^Result/).selectOption('pass');
       await section.getByRole('button', { name: 'Record' }).click();
       await p.getByText('Passivation verification test recorded: passes.').waitFor();
     },

@@ -26,6 +26,8 @@ export type PartFormDefaults = {
   hardnessHrc: string;
   corrosivityCategory: string;
   designLifeYears: string;
+  sizeTolerance: string;
+  sizeToleranceUnit: string;
   weight: string;
   weightUnit: string;
   drawing: { fileId: string; fileName: string };
@@ -96,6 +98,15 @@ export function PartForm({ defaults, customers, unitSystem }: { defaults: PartFo
             errors={e('corrosivityCategory')}
           />
           <NumberField label="Design life asked" name="designLifeYears" unit="years" defaultValue={v('designLifeYears', defaults.designLifeYears)} errors={e('designLifeYears')} />
+          <NumberField
+            label="Tolerance on a finished diameter (±)"
+            name="sizeTolerance"
+            unit={defaults.sizeToleranceUnit === 'mil' ? 'mil' : 'µm'}
+            defaultValue={v('sizeTolerance', defaults.sizeTolerance)}
+            hint="From the drawing: an anodic coating's growth is weighed against it."
+            errors={e('sizeTolerance')}
+          />
+          <input type="hidden" name="sizeToleranceUnit" value={defaults.sizeToleranceUnit} />
         </div>
         {caution ? (
           <Caution kind="high-strength-steel-bake" className="sm:col-span-2">

@@ -71,14 +71,23 @@ function price(input: PricingInput, params: AnodizeParams) {
     },
     { key: 'growth', label: 'Growth per surface', value: dims.perSurfaceUm, quantity: 'thickness' },
     { key: 'penetration', label: 'Penetration into the metal', value: load.penetrationUm, quantity: 'thickness' },
-    { key: 'diameter', label: 'Change on a diameter (compare with the part tolerance)', value: dims.onDiameterUm, quantity: 'thickness' },
+    {
+      key: 'diameter',
+      label: 'Change on a diameter',
+      value: dims.onDiameterUm,
+      quantity: 'thickness',
+      ...(part.sizeToleranceUm && dims.onDiameterUm > part.sizeToleranceUm ? { warning: 'More than the drawing’s tolerance: machine the part undersize before anodizing, or ask the customer.' } : {}),
+    },
+    part.sizeToleranceUm
+      ? { key: 'tolerance', label: 'Drawing tolerance on a diameter (±)', value: part.sizeToleranceUm, quantity: 'thickness' }
+      : { key: 'tolerance', label: 'Drawing tolerance on a diameter', value: 'not on the part record' },
     { key: 'constant', label: `Constant (${k.source})`, value: k.value, unit: 'A·min/dm² per µm', digits: 4 },
     { key: 'seal', label: `Seal (${SEALS[params.seal].label})`, value: params.sealMinutes, unit: 'min', digits: 0 },
   ];
-  const cautions = [
-    'The 720 rule is an estimate: alloy (high-copper 2xxx, high-silicon castings), temperature and acid move it. Replace it with the tank’s measured constant.',
-    ...(params.seal === 'dichromate' ? ['A dichromate seal is hexavalent chromium: a carcinogen. Follow the safety data sheet and local codes.'] : []),
-  ];
+  if (k.source === 'the 720 rule') {
+    figures.push({ key: 'basis', label: 'Basis', value: 'The 720 rule is an estimate: alloy (high-copper 2xxx, high-silicon castings), temperature and acid move it; the tank’s measured constant replaces it.' });
+  }
+  const cautions = params.seal === 'dichromate' ? ['A dichromate seal is hexavalent chromium: a carcinogen. Follow the safety data sheet and local codes.'] : [];
   const components = [
     costComponent('power', 'Power', acKWh, 'kWh', rates.powerPerKwhCents),
     costComponent('additives', 'Acid and additives', lot.ampHours / 1000, 'kA·h', rates.additivesPerKahCents),

@@ -80,8 +80,11 @@ function price(input: PricingInput, params: ElectrolessParams) {
       ...(loadingDm2PerL > MAX_LOADING_DM2_PER_L ? { warning: `Above about ${MAX_LOADING_DM2_PER_L} dm²/L the bath runs unstable: use smaller loads.` } : {}),
     },
   ];
-  const cautions = ['Phosphorus above about 11 % makes the deposit non-magnetic: measure thickness by X-ray or coulometric methods, not a magnetic gauge (ASTM B733 scope).'];
-  if (params.densityGPerCm3 === undefined) cautions.push('The deposit density comes from a phosphorus table recalled from memory; enter the bath’s measured density when known.');
+  if (params.phosphorusWtPct > 11.2) {
+    figures.push({ key: 'magnetic', label: 'Thickness gauge', value: 'Above 11.2 % P the deposit is not ferromagnetic: measure by X-ray fluorescence or microscopy, not a magnetic gauge (ASTM B733 scope).' });
+  }
+  if (params.densityGPerCm3 === undefined) figures.push({ key: 'basis', label: 'Basis', value: 'Density from a phosphorus table recalled from memory; enter the bath’s measured density when known.' });
+  const cautions: string[] = [];
   const components = [
     costComponent('metal', 'Nickel taken from the bath', lot.nickelConsumedG / 1000, 'kg', nickelPrice),
     costComponent('bathLife', 'Bath life (make-up and disposal per metal turnover)', lot.metalTurnovers, 'MTO', costPerMtoCents),

@@ -53,11 +53,12 @@ function price(input: PricingInput, params: PassivationParams) {
     { key: 'cycle', label: 'Cycle per load (immersion + handling)', value: params.minutes + finish.handlingMinutesPerLoad, unit: 'min', digits: 0 },
     { key: 'occupancy', label: 'Tank occupied by the lot', value: tankHours, unit: 'tank-h', digits: 2 },
     { key: 'verification', label: 'Verification test', value: VERIFICATION_TESTS.find((t) => t.id === params.verificationTest)!.label },
+    { key: 'basis', label: 'Window', value: w.source },
   ];
   return assembleLinePrice(input, {
     components: commonComponents(input, { loads, tankHours }, bake),
     bake,
-    cautions: [w.source],
+    cautions: [],
     family: 'passivation',
     figures,
     job: {

@@ -41,6 +41,15 @@ describe('anodizing', () => {
     expect(cost(p, 'power').quantity).toBeCloseTo((127.13 * 16) / 1000 / 0.85, 2);
   });
 
+  it("weighs the change on a diameter against the drawing's tolerance", () => {
+    const tight = priceFinishLine({ ...job, part: { ...job.part, sizeToleranceUm: 20 } });
+    expect(fig(tight, 'diameter').warning).toMatch(/More than the drawing’s tolerance/);
+    expect(fig(tight, 'tolerance').value).toBe(20);
+    const loose = priceFinishLine({ ...job, part: { ...job.part, sizeToleranceUm: 50 } });
+    expect(fig(loose, 'diameter').warning).toBeUndefined();
+    expect(fig(priceFinishLine(job), 'tolerance').value).toBe('not on the part record');
+  });
+
   it('caps the load at the rectifier and says so', () => {
     const p = priceFinishLine({ ...job, process: { ...job.process, rectifierMaxA: 15 } });
     expect(p.job.partsPerLoad).toBe(10); // 15 A ÷ 1.5 A per part

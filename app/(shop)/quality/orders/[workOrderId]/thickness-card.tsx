@@ -20,7 +20,8 @@ export function ThicknessCard({ lot, t, units, tz, canRecord, canVoid, open }: P
   const q = (um: number | null | undefined) => (um === null || um === undefined ? '—' : formatStoredQuantity(um, 'thickness', units));
   const f = lot.finish;
   const s = t.summary;
-  const eff = s ? lotEfficiency({ element: f.element, ionCharge: f.ionCharge, partAreaDm2: lot.part.areaDm2, measuredMeanUm: s.mean, runs: lot.runs }) : null;
+  // Cathode efficiency is electroplating's alone (Faraday's law); other families have none to measure.
+  const eff = s && lotFamily(lot).family.usesEfficiency ? lotEfficiency({ element: f.element, ionCharge: f.ionCharge, partAreaDm2: lot.part.areaDm2, measuredMeanUm: s.mean, runs: lot.runs }) : null;
   const tank = eff?.ok ? lot.runs.find((r) => r.tankId === eff.tankId) : undefined;
   const unit = unitInfo(displayUnit('thickness', units)).symbol;
   const remaining = Math.max(t.sample.sampleSize - t.partsMeasured, 1);

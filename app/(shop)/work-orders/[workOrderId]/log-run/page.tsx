@@ -28,7 +28,7 @@ export default async function LogRunPage({ params }: { params: Promise<{ workOrd
       <PageHeader
         eyebrow={<Link href={`/work-orders/${wo.id}`}>{wo.number}</Link>}
         title={family.runsWithCurrent ? 'Log a plating run' : `Log a ${family.label.toLowerCase()} run`}
-        description={`${wo.part_number} · ${wo.finish_code} · minimum ${formatStoredQuantity(wo.min_thickness_um, 'thickness', user.unitSystem)}`}
+        description={`${wo.part_number} · ${wo.finish_code}${family.makesCoating ? ` · minimum ${formatStoredQuantity(wo.min_thickness_um, 'thickness', user.unitSystem)}` : wo.spec_text ? ` · ${wo.spec_text}` : ''}`}
       />
       <Caution kind={[...new Set([...family.cautions(familyParams(family.id, wo.family_params)), ...(family.runsWithCurrent ? (['hydrogen'] as const) : [])])]} />
       {!open ? (
