@@ -24,7 +24,7 @@ export type TankAnalytesTable = {
   upper_spec: NumericNullable;
   frequency_hours: Numeric;
   additive_rate_ml_per_kah: NumericNullable;
-  /** A lib/bath/additions Supply, or an additive marker; see lib/bath/supplies.ts. */
+  /** A lib/bath/additions Supply, or an additive marker; see lib/bath/templates/supplies.ts. */
   supply: Json<unknown> | null;
   basis: Generated<string>;
   sort_order: Generated<number>;

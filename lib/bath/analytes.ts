@@ -5,7 +5,7 @@ import type { Database, TankAnalyte } from '@/db/types';
 import { AppError } from '@/lib/errors';
 import { getTemplate } from './templates';
 import type { Limits } from './verdict';
-import { readSupply, supplyFor, type AnalyteSupply } from './supplies';
+import { readSupply, supplyFor, type AnalyteSupply } from './templates/supplies';
 
 // A tank's analytes: copied from its bath template when the tank is set up (or seeded), then the
 // tank's own record, with limits a supervisor may change.

@@ -7,7 +7,7 @@ import type { Database } from '@/db/types';
 import { EN_TEMPLATES } from '@/lib/families/electroless-nickel/bath';
 import { bathAge, type BathAge } from '@/lib/families/electroless-nickel/bath-age';
 import { raiseAlert } from './alerts';
-import { readSupply } from './supplies';
+import { readSupply } from './templates/supplies';
 
 type Db = Kysely<Database>;
 

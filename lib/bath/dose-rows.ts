@@ -1,6 +1,6 @@
 // Additive doses as the floor shows them: the material's name from the analyte's supply.
 import type { AdditiveDue } from './amp-hours';
-import { supplyMaterial, type AnalyteSupply } from './supplies';
+import { supplyMaterial, type AnalyteSupply } from './templates/supplies';
 
 export type DoseRow = { analyteId: string; name: string; material: string; rateMlPerKAh: number; kiloAmpHours: number; doseL: number; complete: boolean };
 

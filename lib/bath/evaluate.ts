@@ -4,9 +4,9 @@ import { AppError } from '../errors';
 import { canConvert, convertSymbol } from './display';
 import { getMethod } from './methods';
 import { recommendCorrection, type Recommendation } from './recommend';
-import type { AnalyteSupply } from './supplies';
-import type { AnalysisInputs } from './titration';
-import { computeAnalysis } from './titration';
+import type { AnalyteSupply } from './templates/supplies';
+import type { AnalysisInputs } from './methods/titration';
+import { computeAnalysis } from './methods/titration';
 import { judgeValue, type Limits, type Verdict } from './verdict';
 
 export type EvaluateAnalyte = {

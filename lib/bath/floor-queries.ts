@@ -5,7 +5,7 @@ import type { Database } from '@/db/types';
 import type { Hazard } from './hazards';
 import { findRecentAnalyses } from './history';
 import { findAnalyteStatus, getTank, isUuid, type AnalyteStatus } from './queries';
-import { readSupply, type AnalyteSupply } from './supplies';
+import { readSupply, type AnalyteSupply } from './templates/supplies';
 import { getTemplate } from './templates';
 
 // What the floor screens need, shaped as plain data for the client components.

@@ -11,7 +11,7 @@ import { evaluateReading, evaluateValue } from './evaluate';
 import { readRecommendation, type Recommendation } from './recommend';
 import { describeRules, isRuleId, RULE_WINDOW, rulesAtLast } from './run-rules';
 import type { RuleId } from './spc';
-import type { AnalysisInputs } from './titration';
+import type { AnalysisInputs } from './methods/titration';
 import type { Verdict } from './verdict';
 
 // Logging one analysis: validate, compute, judge against the limits and the run rules on the last

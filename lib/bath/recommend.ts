@@ -4,7 +4,7 @@
 import type { UnitSystem } from '../plating/units';
 import { additionAsMeasuredKg, decantForDilutionL, planCorrection } from './additions';
 import { roundForDisplay, toDisplay } from './display';
-import { supplyMaterial, type AnalyteSupply } from './supplies';
+import { supplyMaterial, type AnalyteSupply } from './templates/supplies';
 import type { VerdictStatus } from './verdict';
 
 export type AdviceAnalyte = { key: string; name: string; unit: string; target: number; supply: AnalyteSupply | null };

@@ -6,8 +6,8 @@ import type { z } from 'zod';
 import type { ProcessFamilyId } from '@/db/types';
 import type { CautionKind } from '@/components/ui/caution';
 import type { Hazard } from '@/lib/bath/hazards';
-import type { BathTemplate } from '@/lib/bath/template-types';
-import type { AnalysisMethod } from '@/lib/bath/titration';
+import type { BathTemplate } from '@/lib/bath/templates/types';
+import type { AnalysisMethod } from '@/lib/bath/methods/titration';
 import type { FamilyFigure, LinePrice, PricingInput } from '@/lib/quotes/pricing';
 
 export type { ProcessFamilyId };

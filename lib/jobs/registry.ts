@@ -2,7 +2,7 @@ import 'server-only';
 import { sendOwedAlertEmails } from '@/lib/bath/alert-mail';
 import { checkMissingAdditions, checkOverdueAnalyses, escalateUnacknowledged } from '@/lib/bath/scheduled-checks';
 import { sendOverdueReminders } from '@/lib/billing/reminders';
-import { alertClosingBakeWindows } from '@/lib/quality/bake-alerts';
+import { alertClosingBakeWindows } from '@/lib/quality/bake/alerts';
 import { expireOverdueQuotes } from '@/lib/quotes/lifecycle';
 import { JOB } from './names';
 

@@ -2,12 +2,12 @@
 // accepted by disposition), the relief bake done right (or dispositioned), no open nonconformance.
 // Pure. The work-order guards and the certificate both ask these questions, so each refusal
 // reads the same wherever it appears.
-import { lotBakeRequirement, type LotBakeRequirement } from './bake-rules';
+import { lotBakeRequirement, type LotBakeRequirement } from './bake/rules';
 import type { ProcessRecordKind } from '@/db/types';
 import { getFamily } from '@/lib/families';
 import { checkPassivation } from '@/lib/plating';
 import type { LotBake, LotProcessRecord, LotRecord, LotReading } from './lot-types';
-import { describeRecord, PROCESS_RECORD_LABELS } from './process-record-rules';
+import { describeRecord, PROCESS_RECORD_LABELS } from './process/rules';
 import { sampleSizeFor, Z14_LEVEL_II, type SampleSize } from './sampling';
 import { summarize, type ReadingSummary } from './stats';
 

@@ -1,8 +1,8 @@
 import 'server-only';
 // The lot record and its bath condition for the screens, read with the app's database.
 import { db } from '@/db';
-import { bathSnapshot } from './bath-snapshot';
-import type { BathSnapshot } from './certificate-content';
+import { bathSnapshot } from './certificate/bath-snapshot';
+import type { BathSnapshot } from './certificate/content';
 import { loadLot } from './lot';
 import type { LotRecord } from './lot-types';
 

@@ -4,7 +4,7 @@
 import type { Kysely } from 'kysely';
 import type { Database, TankAnalyte } from '@/db/types';
 import { getMethod } from '@/lib/bath/methods';
-import { computeAnalysis } from '@/lib/bath/titration';
+import { computeAnalysis } from '@/lib/bath/methods/titration';
 import type { EXCURSION, MISTYPED } from './bath-history';
 
 type Context = {

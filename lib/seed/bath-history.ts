@@ -2,7 +2,7 @@
 // analyte drifting out of control, meter readings and additive additions. Pure and repeatable (a
 // seeded random generator), so the demo looks the same on every machine.
 import { getMethod } from '@/lib/bath/methods';
-import { computeAnalysis, factorPerMl, type AnalysisInputs } from '@/lib/bath/titration';
+import { computeAnalysis, factorPerMl, type AnalysisInputs } from '@/lib/bath/methods/titration';
 
 export const HISTORY_DAYS = 120;
 

@@ -8,10 +8,10 @@ import type { Database, Role } from '@/db/types';
 import { acceptQuote, markQuoteSent } from '@/lib/quotes/lifecycle';
 import { changeWorkOrderState } from '@/lib/orders/states';
 import type { Actor as QualityActor } from '@/lib/quality/access';
-import { issueCertificate } from '@/lib/quality/certificates';
+import { issueCertificate } from '@/lib/quality/certificate';
 import { lotSample } from '@/lib/quality/lot-checks';
 import { loadLot } from '@/lib/quality/lot';
-import { recordProcessRecord } from '@/lib/quality/process-records';
+import { recordProcessRecord } from '@/lib/quality/process/records';
 import { recordReadings } from '@/lib/quality/thickness';
 import { actor, backdate, draftQuote, runOrder } from './quotes';
 

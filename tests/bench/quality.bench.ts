@@ -3,7 +3,7 @@
 // renders, beside a one-line page in the same fonts measured in the same run. Run alone with
 // `npm run bench -- quality`.
 import { performance } from 'node:perf_hooks';
-import { buildCertificateContent, type CertificateContent } from '../../lib/quality/certificate-content';
+import { buildCertificateContent, type CertificateContent } from '../../lib/quality/certificate/content';
 import { makeLot, reading } from '../unit/quality/lot-factory';
 import { medianRender } from './stats';
 import type { BenchRow } from './types';
@@ -29,7 +29,7 @@ function content(readings: number): CertificateContent {
 const timeOf = (render: () => Promise<Buffer>) => medianRender(RUNS, render);
 
 export async function run(): Promise<BenchRow[]> {
-  const { renderCertificatePdf } = await import('../../lib/quality/certificate-pdf');
+  const { renderCertificatePdf } = await import('../../lib/quality/certificate/pdf');
   const k = await import('@react-pdf/renderer');
   const { createElement: h } = await import('react');
   const short = content(8);

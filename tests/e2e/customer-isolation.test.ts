@@ -10,7 +10,7 @@ import { formatMoney } from '@/components/money';
 import { db, pool } from '@/db';
 import { type Permission, roleCan } from '@/lib/auth/roles';
 import { issueInvoice } from '@/lib/billing/mutations';
-import { issueCertificate } from '@/lib/quality/certificates';
+import { issueCertificate } from '@/lib/quality/certificate';
 import { recordReadings } from '@/lib/quality/thickness';
 import { markQuoteSent } from '@/lib/quotes/lifecycle';
 import { addQuoteLine, createQuote } from '@/lib/quotes/mutations';

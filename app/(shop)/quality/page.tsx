@@ -9,7 +9,7 @@ import { StatusBadge } from '@/components/ui/status-badge';
 import { Table, TBody, Td, Th, THead, Tr } from '@/components/ui/table';
 import { requirePageUser } from '@/lib/auth/current-user';
 import { STATE_LABELS } from '@/lib/orders/states';
-import { findOpenBakeWindows } from '@/lib/quality/bake-alerts';
+import { findOpenBakeWindows } from '@/lib/quality/bake/alerts';
 import { findLotsAwaitingCertificate, findLotsAwaitingInspection } from '@/lib/quality/queries';
 import { formatShopTime, shopTimeZone } from '@/lib/quality/shop-time';
 

@@ -1,8 +1,8 @@
 // Sulfuric (Type II) and hard (Type III) anodizing baths and the seal tanks after them. Values are
 // typical, from memory unless a source is named (reference sheet: process-families §1); the
 // supplier's data sheet and the customer's specification govern.
-import { DAILY_H, EVERY_SHIFT_H, TEMPLATE_NOTE, WEEKLY_H, temperature, type BathTemplate } from '@/lib/bath/template-types';
-import type { TitrationMethod } from '@/lib/bath/titration';
+import { DAILY_H, EVERY_SHIFT_H, TEMPLATE_NOTE, WEEKLY_H, temperature, type BathTemplate } from '@/lib/bath/templates/types';
+import type { TitrationMethod } from '@/lib/bath/methods/titration';
 import { PlatingInputError } from '@/lib/plating/errors';
 
 export const ANODIZE_METHODS: readonly TitrationMethod[] = [

@@ -1,6 +1,6 @@
 // An electroless bath's age in metal turnovers: the nickel put back since make-up over the nickel
 // the bath held at make-up (common practice). Pure: the server sums the additions, this judges.
-import type { AnalyteSupply } from '@/lib/bath/supplies';
+import type { AnalyteSupply } from '@/lib/bath/templates/supplies';
 import { getSalt, saltMetalFraction } from '@/lib/chemistry/salts';
 import { metalFraction } from '@/lib/chemistry/formula';
 import { metalTurnoversFromReplenishment } from '@/lib/plating';

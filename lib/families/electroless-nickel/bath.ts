@@ -1,7 +1,7 @@
 // A mid-phosphorus electroless nickel bath (acid hypophosphite). Values are typical, from memory
 // (reference sheet process-families §2 marks them [M]); the supplier's data sheet governs.
-import { DAILY_H, EVERY_SHIFT_H, TEMPLATE_NOTE, temperature, type BathTemplate } from '@/lib/bath/template-types';
-import type { TitrationMethod } from '@/lib/bath/titration';
+import { DAILY_H, EVERY_SHIFT_H, TEMPLATE_NOTE, temperature, type BathTemplate } from '@/lib/bath/templates/types';
+import type { TitrationMethod } from '@/lib/bath/methods/titration';
 
 const HYPO_CAUTION = 'Hypophosphite is a strong reducer: keep it away from oxidisers. The bath runs near 90 °C.';
 

@@ -14,9 +14,9 @@ import {
   type CorrosivityCategory,
 } from '@/lib/plating';
 import { priceLine, type FamilyFigure, type PricingInput } from '@/lib/quotes/pricing';
-import { NICKEL_COPPER_TEMPLATES } from '@/lib/bath/templates-nickel-copper';
-import { OTHER_TEMPLATES } from '@/lib/bath/templates-other';
-import { ZINC_TIN_TEMPLATES } from '@/lib/bath/templates-zinc-tin';
+import { NICKEL_COPPER_TEMPLATES } from '@/lib/bath/templates/nickel-copper';
+import { OTHER_TEMPLATES } from '@/lib/bath/templates/other';
+import { ZINC_TIN_TEMPLATES } from '@/lib/bath/templates/zinc-tin';
 import { num } from '../calculator';
 import type { FamilyCalculator, ProcessFamily } from '../types';
 

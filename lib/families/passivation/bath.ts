@@ -1,7 +1,7 @@
 // Passivation tanks for stainless steel: nitric or citric acid. Values are typical, from memory,
 // except the A967 Nitric 2 concentration (ASTM A967, checked); the supplier's data sheet governs.
-import { DAILY_H, EVERY_SHIFT_H, TEMPLATE_NOTE, temperature, type BathTemplate } from '@/lib/bath/template-types';
-import type { TitrationMethod } from '@/lib/bath/titration';
+import { DAILY_H, EVERY_SHIFT_H, TEMPLATE_NOTE, temperature, type BathTemplate } from '@/lib/bath/templates/types';
+import type { TitrationMethod } from '@/lib/bath/methods/titration';
 
 // vol % of 67 % nitric acid (about 1.40 g/mL, so about 14.9 mol/L, from memory): HNO3 + NaOH.
 // 5 mL sample, 1.0 M NaOH: HNO3 g/L = mL × 12.60 (factor computed); the tank card shows g/L.

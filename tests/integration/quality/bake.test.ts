@@ -1,8 +1,8 @@
 import { afterAll, describe, expect, it } from 'vitest';
 import { db } from '@/db';
 import { changeWorkOrderState } from '@/lib/orders/states';
-import { alertClosingBakeWindows } from '@/lib/quality/bake-alerts';
-import { dispositionBake, recordBake, type BakeInput } from '@/lib/quality/bake-records';
+import { alertClosingBakeWindows } from '@/lib/quality/bake/alerts';
+import { dispositionBake, recordBake, type BakeInput } from '@/lib/quality/bake/records';
 import { actorFor, createLot, errorOf, PLATER, SUPERVISOR } from './fixtures';
 
 afterAll(() => db.destroy());

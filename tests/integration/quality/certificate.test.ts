@@ -1,7 +1,7 @@
 import { afterAll, describe, expect, it } from 'vitest';
 import { db } from '@/db';
-import { recordBake } from '@/lib/quality/bake-records';
-import { certificatePdfFor, getCustomerCertificate, issueCertificate, findCustomerCertificates } from '@/lib/quality/certificates';
+import { recordBake } from '@/lib/quality/bake/records';
+import { certificatePdfFor, getCustomerCertificate, issueCertificate, findCustomerCertificates } from '@/lib/quality/certificate';
 import { dispositionNonconformance, openNonconformance } from '@/lib/quality/nonconformances';
 import { recordReadings } from '@/lib/quality/thickness';
 import { actorFor, BUYER, createLot, errorOf, ESTIMATOR, OTHER_CUSTOMER, passingReadings, PLATER, SUPERVISOR } from './fixtures';

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { evaluateReading, evaluateValue, type EvaluateAnalyte } from '@/lib/bath/evaluate';
 import { getTemplate } from '@/lib/bath/templates';
-import { supplyFor } from '@/lib/bath/supplies';
+import { supplyFor } from '@/lib/bath/templates/supplies';
 
 function fromTemplate(templateId: string, key: string): EvaluateAnalyte {
   const a = getTemplate(templateId)!.analytes.find((x) => x.key === key)!;

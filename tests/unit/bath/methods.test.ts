@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { getMethod, SEEDED_METHODS, TITRATION_METHODS } from '@/lib/bath/methods';
-import { computeAnalysis, factorPerMl, gramsPerTitrantUnit, validateMethod, type TitrationMethod } from '@/lib/bath/titration';
+import { computeAnalysis, factorPerMl, gramsPerTitrantUnit, validateMethod, type TitrationMethod } from '@/lib/bath/methods/titration';
 import { molarMass } from '@/lib/chemistry/formula';
 
 function titration(id: string): TitrationMethod {

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { planCorrection } from '@/lib/bath/additions';
-import { readSupply, supplyMaterial, TEMPLATE_SUPPLIES } from '@/lib/bath/supplies';
+import { readSupply, supplyMaterial, TEMPLATE_SUPPLIES } from '@/lib/bath/templates/supplies';
 import { getTemplate } from '@/lib/bath/templates';
 
 describe('template supplies', () => {

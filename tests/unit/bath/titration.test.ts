@@ -8,7 +8,7 @@ import {
   specificGravityToBaume,
   validateMethod,
   type TitrationMethod,
-} from '@/lib/bath/titration';
+} from '@/lib/bath/methods/titration';
 
 const nickel: TitrationMethod = {
   kind: 'titration',

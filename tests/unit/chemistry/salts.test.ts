@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { getSalt, requireSalt, saltMetalFraction, SALTS } from '@/lib/chemistry/salts';
 import { molarMass } from '@/lib/chemistry/formula';
-import { baumeToSpecificGravity } from '@/lib/bath/titration';
+import { baumeToSpecificGravity } from '@/lib/bath/methods/titration';
 
 describe('salt list', () => {
   it('has unique ids and formulas that parse', () => {

@@ -3,14 +3,14 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { getMethod } from '@/lib/bath/methods';
-import { computeAnalysis, factorPerMl, type TitrationMethod } from '@/lib/bath/titration';
+import { computeAnalysis, factorPerMl, type TitrationMethod } from '@/lib/bath/methods/titration';
 import { aluminiumDecant } from '@/lib/families/anodizing/bath';
 import { bathAge, nickelGrams } from '@/lib/families/electroless-nickel/bath-age';
 import { NITRIC_G_PER_L_PER_VOL_PCT } from '@/lib/families/passivation/bath';
 import { finishSchema } from '@/lib/finishes/schemas';
 import { inspectionChecks, lotChecks, passivationLotCheck } from '@/lib/quality/lot-checks';
 import type { LotProcessRecord } from '@/lib/quality/lot-types';
-import { judgeProcessRecord, processRecordSchema } from '@/lib/quality/process-record-rules';
+import { judgeProcessRecord, processRecordSchema } from '@/lib/quality/process/rules';
 import { makeLot, reading } from '../quality/lot-factory';
 
 const titration = (id: string) => getMethod(id) as TitrationMethod;

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
-import { buildCertificateContent, CONFORMANCE_STATEMENT } from '@/lib/quality/certificate-content';
-import { renderCertificatePdf } from '@/lib/quality/certificate-pdf';
-import { tankStatus } from '@/lib/quality/bath-snapshot';
+import { buildCertificateContent, CONFORMANCE_STATEMENT } from '@/lib/quality/certificate/content';
+import { renderCertificatePdf } from '@/lib/quality/certificate/pdf';
+import { tankStatus } from '@/lib/quality/certificate/bath-snapshot';
 import { makeLot, reading } from './lot-factory';
 
 const shop = { name: 'Kestrel Lane Plating', address: '14 Kestrel Lane', phone: '(555) 010-4410', email: 'office@kestrel-plating.test' };
@@ -59,7 +59,7 @@ describe('renderCertificatePdf', () => {
 describe('woffToSfnt', () => {
   it('unpacks the shipped WOFF into a TrueType file with the same tables', async () => {
     const { readFileSync } = await import('node:fs');
-    const { woffToSfnt } = await import('@/lib/quality/woff-to-sfnt');
+    const { woffToSfnt } = await import('@/lib/quality/certificate/woff-to-sfnt');
     const woff = readFileSync('fonts/ibm-plex-sans-latin-400-normal.woff');
     const sfnt = woffToSfnt(woff);
     // Source: W3C WOFF 1.0 §3: the flavor field is the wrapped font's sfnt version; numTables at offset 12.

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { lotBakeRequirement } from '@/lib/quality/bake-rules';
+import { lotBakeRequirement } from '@/lib/quality/bake/rules';
 import { bakeCheck, lotChecks, nonconformanceCheck, thicknessState } from '@/lib/quality/lot-checks';
 import type { LotBake } from '@/lib/quality/lot-types';
 import { makeLot, reading } from './lot-factory';

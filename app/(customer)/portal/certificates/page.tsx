@@ -4,7 +4,7 @@ import { EmptyState } from '@/components/ui/empty-state';
 import { PageHeader } from '@/components/ui/page-header';
 import { SimpleTable } from '@/components/ui/simple-table';
 import { requirePageUser } from '@/lib/auth/current-user';
-import { findCustomerCertificates } from '@/lib/quality/certificates';
+import { findCustomerCertificates } from '@/lib/quality/certificate';
 import { formatShopDate, shopTimeZone } from '@/lib/quality/shop-time';
 
 export const metadata: Metadata = { title: 'Certificates' };

@@ -13,7 +13,7 @@ import { doseRows } from '@/lib/bath/dose-rows';
 import { findAdditiveDoses, findHullCellPanels, findRecentAdditions, findRecentAnalyses } from '@/lib/bath/history';
 import { findLimitChanges } from '@/lib/bath/limits';
 import { findAnalyteStatus, getTank } from '@/lib/bath/queries';
-import { readSupply } from '@/lib/bath/supplies';
+import { readSupply } from '@/lib/bath/templates/supplies';
 import { getTemplate } from '@/lib/bath/templates';
 import { findBathAges } from '@/lib/bath/bath-age';
 import { formatWhen } from '@/lib/bath/display';

@@ -5,7 +5,7 @@ import { Caution } from '@/components/ui/caution';
 import { EmptyState } from '@/components/ui/empty-state';
 import { PageHeader } from '@/components/ui/page-header';
 import { requirePageUser } from '@/lib/auth/current-user';
-import { findOpenBakeWindows } from '@/lib/quality/bake-alerts';
+import { findOpenBakeWindows } from '@/lib/quality/bake/alerts';
 import { formatShopTime, shopTimeZone } from '@/lib/quality/shop-time';
 import { RefreshEvery } from './refresh-every';
 

@@ -6,7 +6,7 @@ import { Card } from '@/components/ui/card';
 import { PageHeader } from '@/components/ui/page-header';
 import { requirePageUser } from '@/lib/auth/current-user';
 import { formatStoredQuantity } from '@/lib/plating';
-import { getCustomerCertificate } from '@/lib/quality/certificates';
+import { getCustomerCertificate } from '@/lib/quality/certificate';
 import { formatShopTime } from '@/lib/quality/shop-time';
 
 export const metadata: Metadata = { title: 'Certificate' };

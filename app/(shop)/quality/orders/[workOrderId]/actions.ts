@@ -3,8 +3,8 @@
 import { revalidatePath } from 'next/cache';
 import { formAction, zodFieldErrors, type FormState } from '@/lib/action';
 import { displayUnit, toStorage } from '@/lib/plating';
-import { dispositionBake, recordBake } from '@/lib/quality/bake-records';
-import { issueCertificate } from '@/lib/quality/certificates';
+import { dispositionBake, recordBake } from '@/lib/quality/bake/records';
+import { issueCertificate } from '@/lib/quality/certificate';
 import { dispositionNonconformance, openNonconformance } from '@/lib/quality/nonconformances';
 import {
   bakeDispositionSchema,
@@ -18,8 +18,8 @@ import {
   voidReadingSchema,
 } from '@/lib/quality/schemas';
 import { CsvRejected, recordReadings, recordReadingsCsv, voidReading } from '@/lib/quality/thickness';
-import { PROCESS_RECORD_LABELS, processRecordSchema, voidProcessRecordSchema } from '@/lib/quality/process-record-rules';
-import { recordProcessRecord, voidProcessRecord } from '@/lib/quality/process-records';
+import { PROCESS_RECORD_LABELS, processRecordSchema, voidProcessRecordSchema } from '@/lib/quality/process/rules';
+import { recordProcessRecord, voidProcessRecord } from '@/lib/quality/process/records';
 
 const refresh = (workOrderId: string) => revalidatePath(`/quality/orders/${workOrderId}`);
 
@@ -122,7 +122,7 @@ export const dispositionAction = formAction('quality.disposition', dispositionSc
   return { ok: true, message: 'Dispositioned and closed.' };
 });
 
-// Checked as quality.read here so that anyone else hears the certificate rule itself (lib/quality/certificates.ts).
+// Checked as quality.read here so that anyone else hears the certificate rule itself (lib/quality/certificate).
 export const issueCertificateAction = formAction('quality.read', issueCertificateSchema, async (input, user) => {
   const c = await issueCertificate(user, input.workOrderId);
   refresh(input.workOrderId);

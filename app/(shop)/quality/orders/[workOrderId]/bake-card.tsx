@@ -5,7 +5,7 @@ import { StatusBadge } from '@/components/ui/status-badge';
 import { Table, TBody, Td, Th, THead, Tr } from '@/components/ui/table';
 import type { UnitSystem } from '@/db/types';
 import { displayUnit, formatStoredQuantity, fromStorage, unitInfo } from '@/lib/plating';
-import type { LotBakeRequirement } from '@/lib/quality/bake-rules';
+import type { LotBakeRequirement } from '@/lib/quality/bake/rules';
 import type { LotRecord } from '@/lib/quality/lot-types';
 import { formatShopTime, toLocalInputValue } from '@/lib/quality/shop-time';
 import { BakeForm } from './bake-form';

@@ -1,7 +1,7 @@
 import { buttonClasses } from '@/components/ui/button';
 import { Card } from '@/components/ui/card';
 import { StatusBadge } from '@/components/ui/status-badge';
-import type { BathSnapshot } from '@/lib/quality/certificate-content';
+import type { BathSnapshot } from '@/lib/quality/certificate/content';
 import type { LotCheck } from '@/lib/quality/lot-checks';
 import type { LotRecord } from '@/lib/quality/lot-types';
 import { formatShopTime } from '@/lib/quality/shop-time';

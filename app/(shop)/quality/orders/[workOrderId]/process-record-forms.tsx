@@ -6,7 +6,7 @@ import { FormMessage } from '@/components/ui/form-message';
 import { SubmitButton } from '@/components/ui/submit-button';
 import { initialFormState } from '@/lib/action-state';
 import { VERIFICATION_TESTS } from '@/lib/families/passivation';
-import { PHOSPHORUS_METHODS, SEAL_METHODS } from '@/lib/quality/process-record-rules';
+import { PHOSPHORUS_METHODS, SEAL_METHODS } from '@/lib/quality/process/rules';
 import { recordProcessRecordAction, voidProcessRecordAction } from './actions';
 
 export type RecordKindForForm = 'seal_test' | 'phosphorus_content' | 'passivation_test' | 'salt_spray';

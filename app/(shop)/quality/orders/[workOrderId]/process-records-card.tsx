@@ -2,7 +2,7 @@ import { Card } from '@/components/ui/card';
 import { StatusBadge } from '@/components/ui/status-badge';
 import type { LotCheck } from '@/lib/quality/lot-checks';
 import type { LotRecord } from '@/lib/quality/lot-types';
-import { describeRecord, PROCESS_RECORD_LABELS } from '@/lib/quality/process-record-rules';
+import { describeRecord, PROCESS_RECORD_LABELS } from '@/lib/quality/process/rules';
 import { formatShopTime } from '@/lib/quality/shop-time';
 import { ProcessRecordForm, VoidProcessRecordForm, type RecordKindForForm } from './process-record-forms';
 

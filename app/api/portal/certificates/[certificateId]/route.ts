@@ -1,6 +1,6 @@
 // GET /api/portal/certificates/[certificateId] — a customer contact, for their own company's certificates only
 import { withPermission } from '@/lib/http';
-import { certificatePdfResponse } from '@/lib/quality/certificates';
+import { certificatePdfResponse } from '@/lib/quality/certificate';
 
 export const dynamic = 'force-dynamic';
 

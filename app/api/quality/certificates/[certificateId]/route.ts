@@ -1,6 +1,6 @@
 // GET /api/quality/certificates/[certificateId] — staff with quality.read: the certificate's stored PDF, as issued
 import { withPermission } from '@/lib/http';
-import { certificatePdfResponse } from '@/lib/quality/certificates';
+import { certificatePdfResponse } from '@/lib/quality/certificate';
 
 export const dynamic = 'force-dynamic';
 

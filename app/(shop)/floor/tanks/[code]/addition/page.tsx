@@ -7,7 +7,7 @@ import { requirePageUser } from '@/lib/auth/current-user';
 import { doseRows } from '@/lib/bath/dose-rows';
 import { getFloorTank } from '@/lib/bath/floor-queries';
 import { findAdditiveDoses } from '@/lib/bath/history';
-import { supplyMaterial } from '@/lib/bath/supplies';
+import { supplyMaterial } from '@/lib/bath/templates/supplies';
 import { OutboxPanel } from '../../../_ui/outbox-panel';
 import { AdditionPage } from './addition-page';
 

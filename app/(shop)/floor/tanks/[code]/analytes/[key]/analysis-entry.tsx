@@ -9,7 +9,7 @@ import { evaluateReading } from '@/lib/bath/evaluate';
 import type { FloorAnalyte, CorrectionTarget } from '@/lib/bath/floor-queries';
 import { getMethod } from '@/lib/bath/methods';
 import { describeRecommendation, type Recommendation } from '@/lib/bath/recommend';
-import type { AnalysisInputs } from '@/lib/bath/titration';
+import type { AnalysisInputs } from '@/lib/bath/methods/titration';
 import { floorQueue, newEntryKey, useEntryFate } from '@/lib/floor/browser-queue';
 import type { UnitSystem } from '@/lib/plating/units';
 import { AdditionForm } from '../../../../_ui/addition-form';

@@ -1,4 +1,4 @@
-import { effectiveSampleMl, factorPerMl, type AnalysisMethod } from '@/lib/bath/titration';
+import { effectiveSampleMl, factorPerMl, type AnalysisMethod } from '@/lib/bath/methods/titration';
 
 /** How the value is obtained, in a line or two: sample, titrant, indicator and factor, or the meter used. */
 export function MethodNote({ method }: { method: AnalysisMethod }) {

@@ -9,7 +9,7 @@ import { requirePageUser } from '@/lib/auth/current-user';
 import { getCorrectionTarget, getFloorTank, recentForAnalyte } from '@/lib/bath/floor-queries';
 import { formatWhen } from '@/lib/bath/display';
 import { getMethod } from '@/lib/bath/methods';
-import { supplyMaterial } from '@/lib/bath/supplies';
+import { supplyMaterial } from '@/lib/bath/templates/supplies';
 import { OutboxPanel } from '../../../../_ui/outbox-panel';
 import { AnalysisEntry } from './analysis-entry';
 

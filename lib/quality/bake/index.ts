@@ -6,7 +6,7 @@
 // 190–220 °C); ASTM B849 scope (relief applies from 1000 MPa, about 31 HRC); ASTM F1941 trade
 // summary (start within 4 h). The customer's specification always governs, and a bake does not
 // guarantee freedom from embrittlement (B850 note).
-import { badInput, optionalNumber, requireNumber } from '../bath/checks';
+import { badInput, optionalNumber, requireNumber } from '../../bath/checks';
 
 export const BAKE_MIN_C = 190;
 export const BAKE_MAX_C = 220;

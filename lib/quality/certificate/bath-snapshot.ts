@@ -4,8 +4,8 @@
 // limits and no control rule had fired on it (the bath-control area records both).
 import { type Kysely, type Transaction, sql } from 'kysely';
 import type { Database } from '@/db/types';
-import type { BathAnalysis, BathSnapshot, BathTank } from './certificate-content';
-import type { LotRun } from './lot-types';
+import type { BathAnalysis, BathSnapshot, BathTank } from './content';
+import type { LotRun } from '../lot-types';
 
 type Db = Kysely<Database> | Transaction<Database>;
 

@@ -1,7 +1,7 @@
 // Renders one certificate PDF in a plain Node process: reads the content as JSON on stdin and
 // writes the PDF, base64-encoded, to stdout. Used by renderCertificatePdf when the calling process
 // runs under the "react-server" condition (the seed script), whose React cannot drive @react-pdf.
-import { renderCertificatePdf } from './certificate-pdf';
+import { renderCertificatePdf } from './pdf';
 
 async function main(): Promise<void> {
   const chunks: Buffer[] = [];

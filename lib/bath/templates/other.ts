@@ -1,5 +1,5 @@
 // Silver, gold, chromium and pretreatment templates. Sources are reference-sheet IDs' documents.
-import { DAILY_H, EVERY_SHIFT_H, TEMPLATE_NOTE, WEEKLY_H, temperature, type BathTemplate } from './template-types';
+import { DAILY_H, EVERY_SHIFT_H, TEMPLATE_NOTE, WEEKLY_H, temperature, type BathTemplate } from './types';
 
 export const OTHER_TEMPLATES: readonly BathTemplate[] = [
   {

@@ -7,11 +7,11 @@ import { db } from '@/db';
 import type { Database } from '@/db/types';
 import { AppError } from '@/lib/errors';
 import { getFileInfo } from '@/lib/files/store';
-import { type Actor, audit, lockOrder, requireActor } from './access';
-import { judgeBake } from './bake';
-import { lotBake } from './lot-checks';
-import { loadLot } from './lot';
-import { shopTimeZone, zonedLocalToInstant } from './shop-time';
+import { type Actor, audit, lockOrder, requireActor } from '../access';
+import { judgeBake } from '.';
+import { lotBake } from '../lot-checks';
+import { loadLot } from '../lot';
+import { shopTimeZone, zonedLocalToInstant } from '../shop-time';
 
 export type BakeInput = {
   workOrderId: string;

@@ -1,6 +1,6 @@
 // Sections of the certificate PDF: the readings table, the bake record and the bath analyses.
-import type { CertificateContent } from './certificate-content';
-import { Fact, type Kit, pdfStyles, um } from './certificate-pdf-style';
+import type { CertificateContent } from './content';
+import { Fact, type Kit, pdfStyles, um } from './pdf-style';
 
 /** Readings printed in full up to this many; the rest stay in the shop's record. */
 export const PRINTED_READINGS = 40;

@@ -3,7 +3,7 @@
 // IUPAC atomic weights, and tests/unit/bath/methods.test.ts checks them against the sources.
 import type { DerivedMethod, DirectMethod, TitrationMethod } from './titration';
 import { FAMILIES } from '@/lib/families';
-import { INSTRUMENT_METHODS } from './methods-instrumental';
+import { INSTRUMENT_METHODS } from './instrumental';
 
 type TitrationSeed = Omit<TitrationMethod, 'kind' | 'blankMl' | 'unit'> & { blankMl?: number; unit?: TitrationMethod['unit'] };
 const titration = (m: TitrationSeed): TitrationMethod => ({ kind: 'titration', blankMl: 0, unit: 'g/L', ...m });

@@ -1,8 +1,8 @@
 // Analysis methods stored as plain JSON data, and the one function that turns a reading into a
 // bath value. Pure: no I/O. Seeded methods live in ./methods.ts; a supervisor may edit copies.
-import { molarMass } from '../chemistry/formula';
-import { AppError } from '../errors';
-import { badInput, finiteResult, optionalNumber, requireNumber } from './checks';
+import { molarMass } from '../../chemistry/formula';
+import { AppError } from '../../errors';
+import { badInput, finiteResult, optionalNumber, requireNumber } from '../checks';
 
 // 1 oz/gal (US) = 28.349523125 g / 3.785411784 L = 7.48915 g/L (exact definitions, NIST Handbook 44
 // App. C); the handbook factor printed in the Metal Finishing Guide Book is 7.49 (reference §1.1).

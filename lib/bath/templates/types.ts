@@ -1,6 +1,6 @@
 // Shapes and shared constants for bath templates (kept apart from the data to avoid import cycles).
-import type { ElementSymbol } from '../chemistry/atomic-weights';
-import type { Hazard } from './hazards';
+import type { ElementSymbol } from '../../chemistry/atomic-weights';
+import type { Hazard } from '../hazards';
 
 export const TEMPLATE_NOTE = "Typical values; the supplier's data sheet governs." as const;
 

@@ -1,6 +1,6 @@
 // Nickel and copper bath templates. Sources are reference-sheet IDs' underlying documents.
-import { metalFraction } from '../chemistry/formula';
-import { DAILY_H, EVERY_SHIFT_H, TEMPLATE_NOTE, WEEKLY_H, round1, temperature, type BathTemplate } from './template-types';
+import { metalFraction } from '../../chemistry/formula';
+import { DAILY_H, EVERY_SHIFT_H, TEMPLATE_NOTE, WEEKLY_H, round1, temperature, type BathTemplate } from './types';
 
 const niInSulfate = metalFraction('NiSO4·6H2O', 'Ni');
 const niInChloride = metalFraction('NiCl2·6H2O', 'Ni');

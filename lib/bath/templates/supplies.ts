@@ -3,9 +3,9 @@
 // mL/L. Copied onto a tank's analytes when the tank is set up; a supervisor may change it.
 // Choices follow the bath make-ups in the reference sheet §3 and the salts in lib/chemistry/salts;
 // which salt a shop prefers is common practice, and the supplier's data sheet governs.
-import type { Supply } from './additions';
-import { getSalt } from '../chemistry/salts';
-import { EN_SUPPLIES } from '../families/electroless-nickel/bath';
+import type { Supply } from '../additions';
+import { getSalt } from '../../chemistry/salts';
+import { EN_SUPPLIES } from '../../families/electroless-nickel/bath';
 
 export type AnalyteSupply = Supply | { kind: 'additive'; name: string };
 

@@ -4,10 +4,10 @@
 import { spawnSync } from 'node:child_process';
 import { readFileSync } from 'node:fs';
 import path from 'node:path';
-import type { CertificateContent } from './certificate-content';
-import { formatShopTime } from './shop-time';
-import { BathSection, BakeSection, ReadingsTable } from './certificate-pdf-sections';
-import { Fact, type Kit, pdfStyles, um } from './certificate-pdf-style';
+import type { CertificateContent } from './content';
+import { formatShopTime } from '../shop-time';
+import { BathSection, BakeSection, ReadingsTable } from './pdf-sections';
+import { Fact, type Kit, pdfStyles, um } from './pdf-style';
 import { woffToSfnt } from './woff-to-sfnt';
 
 let fontsReady = false;
@@ -147,7 +147,7 @@ export function CertificateDocument({ k, c }: { k: Kit; c: CertificateContent })
 const UNDER_REACT_SERVER = process.execArgv.some((a) => a.includes('react-server'));
 
 function renderInChildProcess(content: CertificateContent): Buffer {
-  const cli = path.join(process.cwd(), 'lib', 'quality', 'certificate-pdf-cli.ts');
+  const cli = path.join(process.cwd(), 'lib', 'quality', 'certificate', 'pdf-cli.ts');
   const execArgv = process.execArgv.filter((a) => !a.includes('react-server') && a !== '--conditions');
   const r = spawnSync(process.execPath, [...execArgv, cli], { input: JSON.stringify(content), maxBuffer: 64 * 1024 * 1024, encoding: 'utf8' });
   if (r.status !== 0) throw new Error(`The certificate PDF could not be rendered: ${r.stderr || r.error?.message || 'unknown error'}`);

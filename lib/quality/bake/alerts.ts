@@ -9,7 +9,7 @@ import type { Database } from '@/db/types';
 import { cautionTexts, SAFETY_DEFERRAL } from '@/components/ui/caution';
 import { appUrl, sendEmail } from '@/lib/email/mailer';
 import { inTransaction } from '@/lib/records/transaction';
-import { formatShopTime, shopTimeZone } from './shop-time';
+import { formatShopTime, shopTimeZone } from '../shop-time';
 
 /** Warn this long before the window closes; the job (lib/jobs/registry.ts) runs every 5 min. */
 export const BAKE_ALERT_LEAD_MINUTES = 60;

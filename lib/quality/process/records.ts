@@ -6,10 +6,10 @@ import type { Kysely } from 'kysely';
 import { db } from '@/db';
 import type { Database } from '@/db/types';
 import { AppError } from '@/lib/errors';
-import { type Actor, audit, lockOrder, requireActor } from './access';
-import { lotFamily } from './lot-checks';
-import { loadLot } from './lot';
-import { judgeProcessRecord, PROCESS_RECORD_LABELS, type ProcessRecordInput } from './process-record-rules';
+import { type Actor, audit, lockOrder, requireActor } from '../access';
+import { lotFamily } from '../lot-checks';
+import { loadLot } from '../lot';
+import { judgeProcessRecord, PROCESS_RECORD_LABELS, type ProcessRecordInput } from './rules';
 
 // Records are taken once the parts have been through the process, and before the certificate.
 const RECORD_STATES = new Set(['in_process', 'plated', 'baked', 'inspected']);

@@ -2,7 +2,7 @@
 // Pure. The finish records the customer's specification, which governs; the ASTM B850 table is
 // shown beside it and used only where the finish is silent.
 import { bakeDecision } from '@/lib/quotes/bake-rule';
-import { BAKE_CAUTION, BAKE_MAX_C, BAKE_MIN_C, DEFAULT_WINDOW_H, bakeRequirement, type BakeRequirement } from './bake';
+import { BAKE_CAUTION, BAKE_MAX_C, BAKE_MIN_C, DEFAULT_WINDOW_H, bakeRequirement, type BakeRequirement } from '.';
 
 // A set point outside the B850 range is held within ±14 °C, the tolerance a published
 // specification uses for its relief bake (Source: QQ-N-290 example, reference §7, 191 ± 14 °C).

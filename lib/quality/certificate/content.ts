@@ -1,13 +1,13 @@
 // What a certificate of conformance says, built once from the lot's records when it is issued and
 // then kept as it is (the stored snapshot and PDF never change). Pure: the same lot and signer
 // give the same content, so it can be checked in tests and rendered anywhere.
-import { BAKE_CAUTION } from './bake';
+import { BAKE_CAUTION } from '../bake';
 import { LIFE_DISCLAIMER } from '@/lib/families/electroplating';
 import { describeZincLife, ZINC_LIFE_STANDARD, zincServiceLife } from '@/lib/plating';
-import { lotBake, lotFamily, lotSample, latestBake, runMinutesPerLoad, thicknessState } from './lot-checks';
-import { describeRecord, PROCESS_RECORD_LABELS } from './process-record-rules';
-import { DISPOSITION_LABELS, type LotRecord } from './lot-types';
-import { methodLabel } from './methods';
+import { lotBake, lotFamily, lotSample, latestBake, runMinutesPerLoad, thicknessState } from '../lot-checks';
+import { describeRecord, PROCESS_RECORD_LABELS } from '../process/rules';
+import { DISPOSITION_LABELS, type LotRecord } from '../lot-types';
+import { methodLabel } from '../methods';
 
 export type BathAnalysis = { analyte: string; value: number; unit: string; analysedAt: string; status: 'in_range' | 'near_limit' | 'out_of_range' };
 export type BathTank = { code: string; name: string; inControl: boolean | null; analyses: BathAnalysis[]; note: string | null };

@@ -1,6 +1,6 @@
 // Zinc, zinc–nickel and tin bath templates. Sources are reference-sheet IDs' underlying documents.
-import { molarMass } from '../chemistry/formula';
-import { DAILY_H, EVERY_SHIFT_H, TEMPLATE_NOTE, WEEKLY_H, round1, temperature, type BathTemplate } from './template-types';
+import { molarMass } from '../../chemistry/formula';
+import { DAILY_H, EVERY_SHIFT_H, TEMPLATE_NOTE, WEEKLY_H, round1, temperature, type BathTemplate } from './types';
 
 // Chloride carried per g/L of KCl and of zinc (as ZnCl2), for the total-chloride analysis.
 const clPerKcl = molarMass('Cl') / molarMass('KCl');

@@ -11,13 +11,13 @@ import { fileDownloadResponse } from '@/lib/files/download';
 import { readFile, storeFile } from '@/lib/files/store';
 import { nextDocumentNumber } from '@/lib/quotes/numbering';
 import type { SessionUser } from '@/lib/auth/current-user';
-import { type Actor, audit, lockOrder, requireActor } from './access';
+import { type Actor, audit, lockOrder, requireActor } from '../access';
 import { bathSnapshot } from './bath-snapshot';
-import { buildCertificateContent, type CertificateContent, type ShopDetails } from './certificate-content';
-import { renderCertificatePdf } from './certificate-pdf';
-import { lotChecks } from './lot-checks';
-import { loadLot } from './lot';
-import { shopTimeZone } from './shop-time';
+import { buildCertificateContent, type CertificateContent, type ShopDetails } from './content';
+import { renderCertificatePdf } from './pdf';
+import { lotChecks } from '../lot-checks';
+import { loadLot } from '../lot';
+import { shopTimeZone } from '../shop-time';
 
 export const NOT_SUPERVISOR = 'Only a supervisor may issue a certificate of conformance.';
 

@@ -1,10 +1,10 @@
 // Bath chemistry templates: the starting point a shop copies for a new tank. Values are typical
 // (reference §2–3 with their sources, or marked "from memory"); the supplier's data sheet governs.
-import { TEMPLATE_NOTE, type BathTemplate } from './template-types';
+import { TEMPLATE_NOTE, type BathTemplate } from './types';
 import { FAMILIES } from '@/lib/families';
-import { getMethod } from './methods';
+import { getMethod } from '../methods';
 
-export * from './template-types';
+export * from './types';
 
 /** Every family's templates (lib/families registers them). */
 export const BATH_TEMPLATES: readonly BathTemplate[] = FAMILIES.flatMap((f) => f.templates);
