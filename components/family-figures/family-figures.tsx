@@ -4,7 +4,7 @@ import type { FamilyFigure } from '@/lib/quotes/pricing';
 /** One figure in the reader's units: a quantity converted, a counted unit as it is, or words. */
 export function figureText(f: FamilyFigure, units: UnitSystem): string {
   if (typeof f.value === 'string') return f.value;
-  if (f.quantity) return formatStoredQuantity(f.value, f.quantity, units);
+  if (f.quantity) return `${formatStoredQuantity(f.value, f.quantity, units)}${f.perHour ? '/h' : ''}`;
   const n = f.digits === undefined ? formatNumber(f.value, 4) : f.value.toLocaleString('en-US', { maximumFractionDigits: f.digits, minimumFractionDigits: f.digits });
   return `${n}${f.unit ? ` ${f.unit}` : ''}`;
 }

@@ -9,6 +9,7 @@ import { lockInvoice, refreshInvoiceBalance } from './balance';
 import { recordCardRefund } from './card-payments';
 import { getPaymentException } from './exceptions';
 import type { ApplyCreditInput, RefundExcessInput, ResolveExceptionInput } from './schemas';
+import Stripe from 'stripe';
 import { paymentServiceError, stripeClient } from './stripe';
 
 // Credit on account: what a customer paid beyond an invoice's balance. It stays on the invoice
@@ -74,6 +75,13 @@ export async function applyCredit(actorId: string | null, input: ApplyCreditInpu
       .execute();
     return entry;
   });
+}
+
+/** Stripe's own refusal (already refunded, more than the charge) as it said it; anything else as the service being unreachable. */
+function refundError(err: unknown): AppError {
+  if (err instanceof AppError) return err;
+  if (err instanceof Stripe.errors.StripeInvalidRequestError) return new AppError('CONFLICT', `Stripe refused the refund: ${err.message}`);
+  return paymentServiceError(err);
 }
 
 async function checkExcess(database: Kysely<Database>, invoiceId: string, amount: number) {
@@ -150,10 +158,7 @@ export async function refundExcess(actorId: string | null, input: RefundExcessIn
     const charge = await stripe.charges.retrieve(chargeId);
     refundedTotal = charge.amount_refunded;
   } catch (err) {
-    if (err instanceof AppError) throw err;
-    const message = err instanceof Error ? err.message : String(err);
-    if (/refund|amount/i.test(message) && !/connect|ECONN|socket/i.test(message)) throw new AppError('CONFLICT', `Stripe refused the refund: ${message}`);
-    throw paymentServiceError(err);
+    throw refundError(err);
   }
   await database.transaction().execute(async (trx) => {
     await recordCardRefund(trx, {
@@ -201,10 +206,7 @@ export async function resolvePaymentException(actorId: string | null, input: Res
       );
       refundId = refund.id;
     } catch (err) {
-      if (err instanceof AppError) throw err;
-      const message = err instanceof Error ? err.message : String(err);
-      if (/refund/i.test(message) && !/connect|ECONN|socket/i.test(message)) throw new AppError('CONFLICT', `Stripe refused the refund: ${message}`);
-      throw paymentServiceError(err);
+      throw refundError(err);
     }
     resolution = `Refunded through Stripe (${refundId})${input.note ? `: ${input.note}` : '.'}`;
   }

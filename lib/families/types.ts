@@ -65,6 +65,8 @@ export type CalculatorInput = {
   label: string;
   kind: 'number' | 'select';
   quantity?: 'area' | 'thickness' | 'currentDensity' | 'temperature' | 'volume';
+  /** The quantity per hour (a rate): typed in the reader's unit of it, per hour. */
+  perHour?: boolean;
   unit?: string;
   options?: readonly { value: string; label: string }[];
   /** The starting value, in storage units. */
@@ -78,6 +80,19 @@ export type FamilyCalculator = {
   inputs: readonly CalculatorInput[];
   compute(values: Record<string, number | string>): { figures: FamilyFigure[]; notes: string[] };
 };
+
+/** A logged run as job costing sees it, in storage units. */
+export type RunCostInput = {
+  areaDm2: number;
+  ampHours: number | null;
+  predictedThicknessUm: number;
+  tankEfficiency: number | null;
+  tank: { volumeL: number; settings: Record<string, unknown> };
+  finish: { element: string; ionCharge: number };
+};
+
+/** What a run really used: the metal deposited, and for a bath with a life in metal turnovers, the share of it. */
+export type RunCost = { metalG: number; bathLife?: { metalTurnovers: number; costPerMtoCents: number } };
 
 export type ProcessFamily<P = Record<string, unknown>> = {
   id: ProcessFamilyId;
@@ -115,6 +130,8 @@ export type ProcessFamily<P = Record<string, unknown>> = {
   /** The bath conditions a run records at the tank, besides time. */
   runConditions: readonly ('temperatureC' | 'concentration')[];
   predictRun(input: FamilyRunInput, params: P): FamilyRunPrediction;
+  /** The run's actual metal and bath use, for job costing. */
+  runCost(input: RunCostInput, params: P): RunCost;
   price(input: PricingInput, params: P): LinePrice;
   quality: readonly QualityRequirement[];
   /** What the certificate says was done, in the trade's words. */

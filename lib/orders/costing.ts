@@ -2,6 +2,7 @@
 // what the quote expected. Pure. Uses the same cost lines and rounding rule as pricing
 // (lib/quotes/pricing.ts): each line half-up to whole cents, then summed.
 import { thicknessFromCharge } from '@/lib/plating';
+import type { RunCost } from '@/lib/families/types';
 import { costComponent, type CostComponent, type LinePrice, type PricingRates } from '@/lib/quotes/pricing';
 
 export type CostedRun = {
@@ -13,6 +14,8 @@ export type CostedRun = {
   tankEfficiency: number;
   /** Bath metal of the run's tank, g/L (see lib/quotes/process.ts). */
   bathMetalGPerL: number;
+  /** What the finish's family says the run used (lib/families); without it, Faraday's law on the charge. */
+  used?: RunCost;
 };
 
 export type CostedJob = {
@@ -38,10 +41,18 @@ export function actualCost(job: CostedJob, runs: readonly CostedRun[], rates: Pr
   let ampHours = 0;
   let loads = 0;
   let tankHours = 0;
+  let bathLifeMto = 0;
+  let bathLifeRate = 0;
   for (const r of runs) {
     const area = r.loads * r.partsPerLoad * job.areaPerPartDm2;
     // The deposit follows Faraday's law at the tank's efficiency; drag-out as in pricing.
-    metalG += thicknessFromCharge({ element: job.element, charge: job.ionCharge, areaDm2: area, ampHours: r.ampHours, efficiency: r.tankEfficiency }).depositMassG;
+    metalG += r.used
+      ? r.used.metalG
+      : thicknessFromCharge({ element: job.element, charge: job.ionCharge, areaDm2: area, ampHours: r.ampHours, efficiency: r.tankEfficiency }).depositMassG;
+    if (r.used?.bathLife) {
+      bathLifeMto += r.used.bathLife.metalTurnovers;
+      bathLifeRate = r.used.bathLife.costPerMtoCents;
+    }
     metalG += job.dragOutLPerM2 * (area / DM2_PER_M2) * r.bathMetalGPerL;
     ampHours += r.ampHours;
     loads += r.loads;
@@ -56,6 +67,7 @@ export function actualCost(job: CostedJob, runs: readonly CostedRun[], rates: Pr
     costComponent('tankTime', `Tank time (${job.method})`, tankHours, 'tank-h', job.method === 'rack' ? rates.tankHourRackCents : rates.tankHourBarrelCents),
     costComponent('masking', 'Masking', job.quantityReceived, 'pc', job.maskingPerPieceCents),
     costComponent('bake', 'Relief bake', job.bakeApplies ? loads : 0, 'load', rates.bakePerLoadCents),
+    ...(bathLifeMto > 0 ? [costComponent('bathLife', 'Bath life (make-up and disposal per metal turnover)', bathLifeMto, 'MTO', bathLifeRate)] : []),
   ];
   return { components, subtotalCents: components.reduce((s, c) => s + c.cents, 0), ampHours, loads, tankHours };
 }

@@ -1,7 +1,8 @@
 import 'server-only';
 import { sql, type Kysely } from 'kysely';
 import { db as defaultDb } from '@/db';
-import type { Database, RateSet } from '@/db/types';
+import type { Database, ProcessFamilyId, RateSet } from '@/db/types';
+import { familyParams, getFamily } from '@/lib/families';
 import type { LinePrice } from '@/lib/quotes/pricing';
 import { rateSetInForce, ratesFromRow } from '@/lib/quotes/pricing-context';
 import { bathMetalGPerL, DEFAULT_DRAG_OUT_L_PER_M2, DEFAULT_RECTIFIER_EFFICIENCY } from '@/lib/quotes/process';
@@ -15,6 +16,9 @@ type Db = Kysely<Database>;
 type CostRow = {
   work_order_id: string;
   amp_hours: number;
+  predicted_thickness_um: number;
+  volume_l: number;
+  family_settings: Record<string, unknown>;
   loads: number;
   parts_per_load: number;
   hours: number;
@@ -31,6 +35,8 @@ type OrderFacts = {
   area_dm2: number;
   element: string;
   ion_charge: number;
+  family: ProcessFamilyId;
+  family_params: Record<string, unknown>;
   method: 'rack' | 'barrel';
   tank_volts: number;
   handling_minutes_per_load: number;
@@ -38,14 +44,23 @@ type OrderFacts = {
   rate_set_id: string | null;
 };
 
-function runsOf(rows: CostRow[], element: string): CostedRun[] {
+function runsOf(rows: CostRow[], o: OrderFacts): CostedRun[] {
+  const family = getFamily(o.family);
+  const params = familyParams(family.id, o.family_params);
   return rows.map((r) => ({
     ampHours: r.amp_hours,
     loads: r.loads,
     partsPerLoad: r.parts_per_load,
     hours: r.hours,
     tankEfficiency: r.tank_efficiency ?? 1,
-    bathMetalGPerL: bathMetalGPerL(r.template_id, element),
+    bathMetalGPerL: bathMetalGPerL(r.template_id, o.element),
+    used: family.runCost(
+      {
+        areaDm2: r.loads * r.parts_per_load * o.area_dm2, ampHours: r.amp_hours, predictedThicknessUm: r.predicted_thickness_um, tankEfficiency: r.tank_efficiency,
+        tank: { volumeL: r.volume_l, settings: r.family_settings }, finish: { element: o.element, ionCharge: o.ion_charge },
+      },
+      params,
+    ),
   }));
 }
 
@@ -57,7 +72,7 @@ function compare(o: OrderFacts, runs: CostRow[], rates: RateSet): CostComparison
       bakeApplies: o.bake_required,
       rectifierEfficiency: DEFAULT_RECTIFIER_EFFICIENCY, dragOutLPerM2: DEFAULT_DRAG_OUT_L_PER_M2[o.method],
     },
-    runsOf(runs, o.element),
+    runsOf(runs, o),
     ratesFromRow(rates),
   );
   const quoted = o.quoted_cost as Partial<LinePrice>;
@@ -72,7 +87,7 @@ function orderFacts(conn: Db) {
     .leftJoin('quote_lines as l', 'l.id', 'w.quote_line_id')
     .leftJoin('quotes as q', 'q.id', 'l.quote_id')
     .select([
-      'w.id', 'w.total_cents', 'w.quoted_cost', 'w.quantity_received', 'w.bake_required', 'p.area_dm2', 'f.element', 'f.ion_charge', 'f.method',
+      'w.id', 'w.total_cents', 'w.quoted_cost', 'w.quantity_received', 'w.bake_required', 'p.area_dm2', 'f.element', 'f.ion_charge', 'f.family', 'f.family_params', 'f.method',
       'f.tank_volts', 'f.handling_minutes_per_load', 'f.masking_per_piece_cents', 'q.rate_set_id',
     ]);
 }
@@ -82,7 +97,8 @@ function costRows(conn: Db) {
     .selectFrom('plating_runs as r')
     .innerJoin('tanks as t', 't.id', 'r.tank_id')
     .select([
-      'r.work_order_id', sql<number>`coalesce(r.amp_hours, 0)`.as('amp_hours'), 'r.loads', 'r.parts_per_load', 't.efficiency as tank_efficiency', 't.template_id',
+      'r.work_order_id', sql<number>`coalesce(r.amp_hours, 0)`.as('amp_hours'), 'r.loads', 'r.parts_per_load', 'r.predicted_thickness_um', 't.efficiency as tank_efficiency', 't.template_id',
+      't.volume_l', 't.family_settings',
       sql<number>`extract(epoch from (r.ended_at - r.started_at)) / 3600.0`.as('hours'),
     ]);
 }

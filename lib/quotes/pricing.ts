@@ -135,6 +135,8 @@ export type FamilyFigure = {
   quantity?: 'thickness' | 'area' | 'currentDensity' | 'temperature' | 'volume' | 'mass';
   /** A unit shown as it is (min, A, A·h, %, MTO …). */
   unit?: string;
+  /** A quantity per hour (a deposition rate): shown in the reader's unit with "/h". */
+  perHour?: boolean;
   /** Decimal places for a counted unit; a quantity follows the unit module's own precision. */
   digits?: number;
   /** A plain-words warning when the figure crosses a limit. */

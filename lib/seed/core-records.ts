@@ -171,7 +171,14 @@ export async function seedCoreRecords(db: Kysely<Database>): Promise<void> {
       family_settings: JSON.stringify(family_settings ?? {}),
       made_up_at: made_up_days_ago === undefined ? null : new Date(Date.now() - made_up_days_ago * 86_400_000),
     };
-    await db.insertInto('tanks').values(values).onConflict((oc) => oc.column('code').doUpdateSet(values)).execute();
+    // A second seed keeps the bath's make-up date (its age counts from there) and its settings.
+    await db
+      .insertInto('tanks')
+      .values(values)
+      .onConflict((oc) =>
+        oc.column('code').doUpdateSet({ ...values, made_up_at: sql`coalesce(tanks.made_up_at, excluded.made_up_at)`, family_settings: sql`case when tanks.family_settings = '{}'::jsonb then excluded.family_settings else tanks.family_settings end` }),
+      )
+      .execute();
   }
   for (const f of DEMO_FINISHES) {
     const values = { ...f, process_route: JSON.stringify(f.process_route) };

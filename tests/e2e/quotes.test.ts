@@ -131,11 +131,11 @@ describe('quote to work order', () => {
         await page.getByRole('heading', { name: 'Log a plating run' }).waitFor();
         await page.getByText('Rectifier amps').click();
         await page.getByLabel('Rectifier current').fill('60');
-        await page.getByLabel('Plating minutes per load').fill('20');
+        await page.getByLabel('Minutes per load under current').fill('20');
         // Far too short: the verdict shows before anything is saved.
         await page.getByText('Below the minimum').waitFor();
         await screenshot(page, 'run-below-minimum-phone');
-        await page.getByLabel('Plating minutes per load').fill('300');
+        await page.getByLabel('Minutes per load under current').fill('300');
         await page.getByText('Meets the minimum').waitFor();
         await page.getByRole('button', { name: 'Save run' }).click();
         await page.getByText(/^Run saved:/).waitFor();

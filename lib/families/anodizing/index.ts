@@ -112,10 +112,10 @@ export const ANODIZE_CALCULATOR = {
   title: 'Anodizing: one load',
   inputs: [
     { name: 'areaDm2', label: 'Area in the load', kind: 'number', quantity: 'area', initial: 20 },
-    { name: 'thicknessUm', label: 'Coating thickness', kind: 'number', quantity: 'thickness', initial: 25 },
-    { name: 'currentDensityAdm2', label: 'Current density', kind: 'number', quantity: 'currentDensity', initial: 1.5 },
+    { name: 'thicknessUm', label: 'Anodic coating thickness', kind: 'number', quantity: 'thickness', initial: 25 },
+    { name: 'currentDensityAdm2', label: 'Anodizing current density', kind: 'number', quantity: 'currentDensity', initial: 1.5 },
     { name: 'growthFraction', label: 'Share that grows outward', kind: 'number', initial: 0.5, hint: 'Hard coatings about 0.5, Type II about 0.33 (common practice).' },
-    { name: 'rectifierMaxA', label: 'Rectifier rating', kind: 'number', unit: 'A', initial: 1000 },
+    { name: 'rectifierMaxA', label: 'Anodizing rectifier rating', kind: 'number', unit: 'A', initial: 1000 },
     { name: 'constantAminPerDm2PerUm', label: 'Measured constant (empty: the 720 rule)', kind: 'number', unit: 'A·min/dm² per µm', initial: '' },
   ],
   compute(v: Record<string, number | string>) {
@@ -169,6 +169,8 @@ export const anodizing: ProcessFamily<AnodizeParams> = {
   runsWithCurrent: true,
   runConditions: [],
   // The charge per area over the constant: µm = A·min/dm² ÷ (A·min/dm² per µm).
+  // The oxide is the part's own aluminium: no metal is bought for it.
+  runCost: () => ({ metalG: 0 }),
   predictRun: (input, params) => {
     if (input.ampHours === null) throw new PlatingInputError('currentA', 'An anodizing run needs its current or its amp-hours.');
     const area = runArea(input);

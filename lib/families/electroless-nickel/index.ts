@@ -69,7 +69,8 @@ function price(input: PricingInput, params: ElectrolessParams) {
   const bake = bakeFor(input);
   const figures: FamilyFigure[] = [
     { key: 'deposit', label: 'Deposit, nominal', value: targetUm, quantity: 'thickness' },
-    { key: 'minutes', label: `Time per load at ${params.depositionRateUmPerH} µm/h`, value: lot.minutes, unit: 'min', digits: 1 },
+    { key: 'rate', label: 'Deposition rate of the bath', value: params.depositionRateUmPerH, quantity: 'thickness', perHour: true },
+    { key: 'minutes', label: 'Time per load', value: lot.minutes, unit: 'min', digits: 1 },
     { key: 'phosphorus', label: 'Phosphorus in the deposit', value: params.phosphorusWtPct, unit: '% by weight', digits: 1 },
     { key: 'density', label: params.densityGPerCm3 ? 'Deposit density' : 'Deposit density (from the phosphorus content)', value: lot.densityGPerCm3, unit: 'g/cm³', digits: 2 },
     { key: 'nickel', label: 'Nickel taken from the bath', value: lot.nickelConsumedG, quantity: 'mass' },
@@ -129,7 +130,7 @@ export const EN_CALCULATOR = {
   inputs: [
     { name: 'areaDm2', label: 'Area of the job', kind: 'number', quantity: 'area', initial: 10 },
     { name: 'thicknessUm', label: 'Deposit thickness', kind: 'number', quantity: 'thickness', initial: 25 },
-    { name: 'depositionRateUmPerH', label: 'Deposition rate (µm per hour)', kind: 'number', unit: 'µm/h', initial: 15 },
+    { name: 'depositionRateUmPerH', label: 'Deposition rate', kind: 'number', quantity: 'thickness', perHour: true, initial: 15 },
     { name: 'phosphorusWtPct', label: 'Phosphorus', kind: 'number', unit: '%', initial: 8 },
     { name: 'bathVolumeL', label: 'Bath volume', kind: 'number', quantity: 'volume', initial: 100 },
     { name: 'nickelMakeUpGPerL', label: 'Nickel at make-up', kind: 'number', unit: 'g/L', initial: 6 },
@@ -182,6 +183,16 @@ export const electrolessNickel: ProcessFamily<ElectrolessParams> = {
   cautions: () => ['nickel', 'heat'],
   runsWithCurrent: false,
   runConditions: ['temperatureC'],
+  // The nickel the predicted deposit took from the bath, and its share of the bath's life.
+  runCost: (input, params) => {
+    if (!(input.predictedThicknessUm > 0)) return { metalG: 0 };
+    const tank = enTankSettings(input.tank.settings);
+    const r = electrolessCalc({
+      areaDm2: input.areaDm2, thicknessUm: input.predictedThicknessUm, depositionRateUmPerH: params.depositionRateUmPerH, phosphorusWtPct: params.phosphorusWtPct,
+      densityGPerCm3: params.densityGPerCm3, bathVolumeL: input.tank.volumeL, nickelMakeUpGPerL: tank.nickelMakeUpGPerL,
+    });
+    return { metalG: r.nickelConsumedG, bathLife: { metalTurnovers: r.metalTurnovers, costPerMtoCents: (tank.makeUpCostCents + tank.disposalCostCents) / tank.endOfLifeMto } };
+  },
   // Thickness is the bath's rate × time in it.
   predictRun: (input, params) => {
     const area = runArea(input);

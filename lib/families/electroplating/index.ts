@@ -7,6 +7,7 @@ import {
   describeZincLife,
   isCorrosivityCategory,
   PlatingInputError,
+  thicknessFromCharge,
   ZINC_LIFE_STANDARD,
   ZINC_LOSS_UM_PER_YEAR,
   zincServiceLife,
@@ -83,6 +84,11 @@ export const electroplating: ProcessFamily<ElectroplatingParams> = {
   cautions: () => ['electrical'],
   runsWithCurrent: true,
   runConditions: [],
+  // Faraday's law on the run's charge at the tank's efficiency.
+  runCost: (input) =>
+    input.ampHours && input.ampHours > 0 && input.tankEfficiency
+      ? { metalG: thicknessFromCharge({ element: input.finish.element, charge: input.finish.ionCharge, areaDm2: input.areaDm2, ampHours: input.ampHours, efficiency: input.tankEfficiency }).depositMassG }
+      : { metalG: 0 },
   predictRun: (input) => {
     if (input.ampHours === null) throw new PlatingInputError('currentA', 'A plating run needs its current or its amp-hours.');
     if (input.tank.efficiency === null) throw new PlatingInputError('tankId', 'The tank has no cathode efficiency on record.');

@@ -120,6 +120,7 @@ export const passivation: ProcessFamily<PassivationParams> = {
   runsWithCurrent: false,
   runConditions: ['temperatureC', 'concentration'],
   // No coating: the run is judged against its treatment's window, lot by lot (ASTM A967 §5.2.2).
+  runCost: () => ({ metalG: 0 }),
   predictRun: (input, params) => {
     const area = runArea(input);
     const { temperatureC, concentration } = input.conditions;

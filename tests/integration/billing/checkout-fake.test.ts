@@ -10,6 +10,7 @@ import { POST } from '@/app/api/webhooks/stripe/route';
 import { db } from '@/db';
 import { startInvoiceCheckout } from '@/lib/billing/checkout';
 import { refundExcess, resolvePaymentException } from '@/lib/billing/credit';
+import { processStripeEvent } from '@/lib/billing/webhook';
 import { todayIso } from '@/lib/billing/dates';
 import { issueInvoice, recordManualPayment } from '@/lib/billing/mutations';
 import { stripeClient } from '@/lib/billing/stripe';
@@ -155,6 +156,16 @@ describe('paying an invoice through the local Stripe fake', () => {
     expect(await db.selectFrom('payments').select('id').where('invoice_id', '=', inv.id).execute()).toEqual([]);
     expect((await db.selectFrom('invoices').select('status').where('id', '=', inv.id).executeTakeFirstOrThrow()).status).toBe('issued');
     await expect(resolvePaymentException(owner.id, { exceptionId: ex.id, action: 'refund', note: '' })).rejects.toThrow('already resolved');
+  });
+
+  it("passes on Stripe's own refusal of a refund, and leaves the exception open", async () => {
+    const owner = await sessionUser(OWNER);
+    const pi = `pi_not_at_stripe_${Date.now()}`;
+    const evt = { id: `evt_${Date.now()}`, object: 'event', type: 'payment_intent.succeeded', created: Math.floor(Date.now() / 1000), data: { object: { id: pi, object: 'payment_intent', amount: 900, amount_received: 900, currency: 'usd', metadata: {}, latest_charge: null } } };
+    await processStripeEvent(evt as never);
+    const ex = await db.selectFrom('payment_exceptions').select(['id']).where('stripe_payment_intent_id', '=', pi).executeTakeFirstOrThrow();
+    await expect(resolvePaymentException(owner.id, { exceptionId: ex.id, action: 'refund', note: '' })).rejects.toThrow(/^Stripe refused the refund: /);
+    expect((await db.selectFrom('payment_exceptions').select('status').where('id', '=', ex.id).executeTakeFirstOrThrow()).status).toBe('open');
   });
 
   it('reports an unreachable payment service as such, with nothing charged', async () => {

@@ -7,6 +7,7 @@ import { db } from '@/db';
 import { findBathAges } from '@/lib/bath/bath-age';
 import { recordAddition } from '@/lib/bath/record';
 import { updateTankSettings } from '@/lib/bath/tank-settings';
+import { findCostedOrders, getJobCost } from '@/lib/orders/job-cost';
 import { logPlatingRun, type RunInput } from '@/lib/orders/runs';
 import { changeWorkOrderState } from '@/lib/orders/states';
 import { issueCertificate } from '@/lib/quality/certificate';
@@ -116,6 +117,28 @@ describe('runs by family', () => {
   });
 });
 
+describe('job costing by family', () => {
+  it('costs an electroless run by the nickel its deposit took and its share of the bath life', async () => {
+    const plater = await sessionUser(PLATER);
+    const wo = await order('HV-BODY-120', 'EN-B733-25', 10);
+    await logPlatingRun(plater, run(wo, await tankId('E-EN1'), { minutesPerLoad: 110, temperature: 88 }));
+    const cost = (await getJobCost(wo))!;
+    const rows = Object.fromEntries(cost.rows.map((r) => [r.key, r.actualCents]));
+    // 10 × 4.6 dm² × 27.5 µm (15 µm/h × 110 min) = 12.65 cm³ × 7.955 g/cm³ (8 % P, table from memory) × 0.92 Ni = 92.6 g × $22/kg.
+    const nickelG = 46 * 27.5 * 0.01 * (8.5 - (0.6 * 5) / 5.5) * 0.92;
+    expect(rows.metal).toBe(Math.round((nickelG / 1000) * 2200));
+    // ÷ (400 L × 6 g/L) = 0.0386 MTO × ($1 840 + $960) ÷ 8 MTO (the demo tank's costs).
+    expect(rows.bathLife).toBe(Math.round((nickelG / 2400) * (280000 / 8)));
+    expect(rows.power).toBe(0);
+  });
+
+  it('costs every plated order of the demo without a refusal, whatever its family', async () => {
+    const rows = await findCostedOrders({ from: '2020-01-01', to: '2099-12-31' });
+    expect(rows.length).toBeGreaterThan(0);
+    expect(rows.every((r) => Number.isSafeInteger(r.comparison.actualCostCents))).toBe(true);
+  });
+});
+
 describe('the family records a certificate waits for', () => {
   it('an anodized lot: refused without its seal test, issued with it, and the certificate names the process', async () => {
     const plater = await sessionUser(PLATER);
@@ -167,12 +190,12 @@ describe('an electroless bath’s age', () => {
     const after = (await findBathAges([tank])).get(tank)!;
     expect(after.metalTurnovers - before.metalTurnovers).toBeCloseTo((2150 * 0.22330) / 2400, 3);
     expect(after.atEndOfLife).toBe(true);
-    const alerts = await db.selectFrom('bath_alerts').select(['kind', 'message']).where('tank_id', '=', tank).where('kind', '=', 'end_of_life').execute();
+    const alerts = await db.selectFrom('bath_alerts').select(['kind', 'message']).where('tank_id', '=', tank).where('kind', '=', 'end_of_life').where('state', '<>', 'acknowledged').execute();
     expect(alerts).toHaveLength(1);
     expect(alerts[0]!.message).toMatch(/^E-EN1 Electroless nickel: \d+\.\d\d of [\d.]+ metal turnovers, the end of life set for this bath\./);
     // A second addition counts on the same alert, not a new one.
     await recordAddition(plater, { tankId: tank, analyteId: nickel.id, kind: 'correction', material: 'Nickel sulfate hexahydrate', amount: 1, unit: 'kg', madeAt: new Date(), key: `t-${randomUUID()}` });
-    expect(await db.selectFrom('bath_alerts').select('id').where('tank_id', '=', tank).where('kind', '=', 'end_of_life').execute()).toHaveLength(1);
+    expect(await db.selectFrom('bath_alerts').select('id').where('tank_id', '=', tank).where('kind', '=', 'end_of_life').where('state', '<>', 'acknowledged').execute()).toHaveLength(1);
     // Settings go through the family's schema: a negative end of life is refused, nothing changes.
     expect(await errorOf(updateTankSettings(supervisor, { tankId: tank, madeUpOn: null, units: { thickness: 'um', temperature: 'degC' }, form: { ts_nickelMakeUpGPerL: '6', ts_endOfLifeMto: '-2' } }))).toBe('BAD_INPUT: Check the highlighted settings.');
     await updateTankSettings(supervisor, { tankId: tank, madeUpOn: null, units: { thickness: 'um', temperature: 'degC' }, form: { ts_nickelMakeUpGPerL: '6', ts_endOfLifeMto: '8', ts_makeUpCostCents: '1840', ts_disposalCostCents: '960' } });

@@ -40,7 +40,7 @@ function Calculator({ calc, system }: { calc: FamilyCalculator; system: UnitSyst
               key={i.name}
               label={i.label}
               name={i.name}
-              unit={i.quantity ? UNITS[displayUnit(i.quantity, system)].symbol : i.unit}
+              unit={i.quantity ? `${UNITS[displayUnit(i.quantity, system)].symbol}${i.perHour ? '/h' : ''}` : i.unit}
               value={text[i.name] ?? ''}
               onChange={(e) => setText((t) => ({ ...t, [i.name]: e.target.value }))}
               hint={i.hint}
