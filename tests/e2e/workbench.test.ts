@@ -67,7 +67,7 @@ describe('estimator workbench', () => {
       await expect.poll(() => figure(page, 'areaPerPart').textContent()).toMatch(/ft²/);
       await expect(page.locator('#workbench-stl-status').textContent()).resolves.toContain('cube-25mm.stl');
       await expect(figure(page, 'minimumThickness').textContent()).resolves.toMatch(/\u202fmil$/);
-      const cdUnit = await page.getByLabel('Current density').getAttribute('aria-describedby');
+      const cdUnit = await page.getByLabel(/^Current density/).getAttribute('aria-describedby');
       await expect(page.locator(`[id="${cdUnit}"]`).textContent()).resolves.toBe('A/ft²');
       // Source: NIST SP 811 App. B.8: 0.375 dm² = 5.8125 in² (1 in² = 6.4516 cm²).
       await expect(page.getByLabel('Part measurements').textContent()).resolves.toContain('5.813\u202fin²');
