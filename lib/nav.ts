@@ -22,6 +22,7 @@ export const STAFF_NAV: NavItem[] = [
   { href: '/invoices', label: 'Invoices', permission: 'invoices.read' },
   { href: '/settings/users', label: 'Users', permission: 'users.manage' },
   { href: '/settings/rates', label: 'Rates', permission: 'rates.manage' },
+  { href: '/settings/passivation', label: 'Passivation windows', permission: 'bath.limits' },
   { href: '/settings/mailbox', label: 'Demo mailbox', permission: 'mailbox.read' },
 ];
 

@@ -46,6 +46,8 @@ export type FamilyRunInput = {
   tank: { efficiency: number | null; settings: Record<string, unknown> };
   /** Bath conditions read at the tank (temperature, acid concentration), where the family asks. */
   conditions: { temperatureC?: number; concentration?: number };
+  /** The shop's own data for the family (lib/families/shop-data), e.g. its passivation windows. */
+  familyData?: Record<string, unknown>;
 };
 
 /** What the run should have done, shown before saving and stored with it. */
@@ -78,7 +80,7 @@ export type CalculatorInput = {
 export type FamilyCalculator = {
   title: string;
   inputs: readonly CalculatorInput[];
-  compute(values: Record<string, number | string>): { figures: FamilyFigure[]; notes: string[] };
+  compute(values: Record<string, number | string>, familyData?: Record<string, unknown>): { figures: FamilyFigure[]; notes: string[] };
 };
 
 /** A logged run as job costing sees it, in storage units. */

@@ -7,6 +7,7 @@ import { AppError } from '@/lib/errors';
 import { PlatingInputError, toStorage, unitsOf, type UnitOf } from '@/lib/plating';
 import { assertCan, type Actor } from '@/lib/quotes/access';
 import { familyOfTemplate, familyParams, getFamily } from '@/lib/families';
+import { loadFamilyData } from '@/lib/families/shop-data';
 import type { FamilyRunPrediction } from '@/lib/families/types';
 import { runAmpHours, runMinutes, type RunCharge } from './run-math';
 import { changeWorkOrderState } from './states';
@@ -114,6 +115,7 @@ export async function logPlatingRun(actor: Actor, input: RunInput, conn: Db = de
     let ampHours: number | null;
     let prediction: FamilyRunPrediction;
     const conditions = conditionsOf(input, family.runConditions);
+    const familyData = await loadFamilyData(trx, family.id);
     try {
       ampHours = family.runsWithCurrent ? runAmpHours(chargeOf(input)) : null;
       if (ampHours === null) runMinutes(input.minutesPerLoad ?? Number.NaN);
@@ -121,7 +123,7 @@ export async function logPlatingRun(actor: Actor, input: RunInput, conn: Db = de
         {
           ampHours, minutesPerLoad: input.minutesPerLoad ?? Number.NaN, loads: input.loads, partsPerLoad: input.partsPerLoad, areaPerPartDm2: wo.area_dm2,
           finish: { element: wo.element, ionCharge: wo.ion_charge, distributionRatio: wo.distribution_ratio, minThicknessUm: wo.min_thickness_um },
-          tank: { efficiency: tank.efficiency, settings: tank.family_settings }, conditions,
+          tank: { efficiency: tank.efficiency, settings: tank.family_settings }, conditions, familyData,
         },
         params,
       );

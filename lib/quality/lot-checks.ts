@@ -5,6 +5,7 @@
 import { lotBakeRequirement, type LotBakeRequirement } from './bake/rules';
 import type { ProcessRecordKind } from '@/db/types';
 import { getFamily } from '@/lib/families';
+import { windowsOf } from '@/lib/families/passivation/windows';
 import { checkPassivation } from '@/lib/plating';
 import type { LotBake, LotProcessRecord, LotRecord, LotReading } from './lot-types';
 import { describeRecord, PROCESS_RECORD_LABELS } from './process/rules';
@@ -185,13 +186,14 @@ export function passivationLotCheck(lot: LotRecord, windowId: string): LotCheck 
   const missing = lot.runs.filter((r) => r.conditions.temperatureC === undefined || r.conditions.concentration === undefined);
   if (missing.length) return { key: 'passivation_lot', ok: false, message: `${missing.length} run${missing.length === 1 ? ' has' : 's have'} no bath temperature or concentration recorded.` };
   const accepted = lot.nonconformances.some((nc) => nc.disposition === 'use_as_is');
+  const windows = windowsOf(lot.familyData);
   const outside = lot.runs
-    .map((r) => checkPassivation({ windowId, temperatureC: r.conditions.temperatureC!, minutes: runMinutesPerLoad(r), concentration: r.conditions.concentration! }))
+    .map((r) => checkPassivation({ windowId, temperatureC: r.conditions.temperatureC!, minutes: runMinutesPerLoad(r), concentration: r.conditions.concentration! }, windows))
     .filter((v) => !v.ok);
   if (outside.length && !accepted) {
     return { key: 'passivation_lot', ok: false, message: `${outside.length} run${outside.length === 1 ? ' was' : 's were'} outside the treatment's window: a nonconformance needs the customer's disposition.` };
   }
-  const w = outside[0]?.window ?? checkPassivation({ windowId, temperatureC: lot.runs[0]!.conditions.temperatureC!, minutes: runMinutesPerLoad(lot.runs[0]!), concentration: lot.runs[0]!.conditions.concentration! }).window;
+  const w = outside[0]?.window ?? checkPassivation({ windowId, temperatureC: lot.runs[0]!.conditions.temperatureC!, minutes: runMinutesPerLoad(lot.runs[0]!), concentration: lot.runs[0]!.conditions.concentration! }, windows).window;
   return {
     key: 'passivation_lot',
     ok: true,

@@ -136,6 +136,8 @@ export type LotProcessRecord = {
 
 export type LotRecord = {
   processRecords?: LotProcessRecord[];
+  /** The shop's own data for the finish's family (lib/families/shop-data), e.g. its passivation windows. */
+  familyData?: Record<string, unknown>;
   order: LotOrder;
   part: LotPart;
   finish: LotFinish;

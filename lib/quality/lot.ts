@@ -5,6 +5,7 @@
 import type { Kysely, Transaction } from 'kysely';
 import type { Database } from '@/db/types';
 import type { LotRecord, LotSamplingPlan } from './lot-types';
+import { loadFamilyData } from '@/lib/families/shop-data';
 import { Z14_LEVEL_II } from './sampling';
 
 type Db = Kysely<Database> | Transaction<Database>;
@@ -99,6 +100,7 @@ export async function loadLot(db: Db, workOrderId: string): Promise<LotRecord | 
   ]);
 
   return {
+    familyData: await loadFamilyData(db, o.family),
     order: {
       id: o.id, number: o.number, state: o.state, poNumber: o.po_number, quantityOrdered: o.quantity_ordered, quantityReceived: o.quantity_received,
       quantityShipped: o.quantity_shipped, bakeRequired: o.bake_required, customerId: o.customer_id, customerName: o.customer_name, customerCode: o.customer_code,

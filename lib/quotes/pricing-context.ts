@@ -5,6 +5,7 @@ import type { Database, PricingBasis, RateSet } from '@/db/types';
 import { AppError } from '@/lib/errors';
 import { PlatingInputError } from '@/lib/plating';
 import { priceFinishLine } from '@/lib/families';
+import { loadFamilyData } from '@/lib/families/shop-data';
 import type { LinePrice, PricingInput, PricingRates } from './pricing';
 import { processForFinish, type TankFacts } from './process';
 
@@ -91,6 +92,7 @@ export async function priceRequest(conn: Db, req: LineRequest): Promise<PricedLi
       tanks,
     );
     const input: PricingInput = {
+      familyData: await loadFamilyData(conn, finish.family),
       part: {
         areaDm2: part.area_dm2, weightG: part.weight_g, hardnessHrc: part.hardness_hrc, tensileMpa: part.tensile_mpa,
         corrosivityCategory: part.corrosivity_category, designLifeYears: part.design_life_years, sizeToleranceUm: part.size_tolerance_um,

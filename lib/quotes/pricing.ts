@@ -71,6 +71,8 @@ export type PricingRates = {
 };
 
 export type PricingInput = {
+  /** The shop's own data for the finish's family (lib/families/shop-data), e.g. its passivation windows. */
+  familyData?: Record<string, unknown>;
   part: PricedPart;
   finish: PricedFinish;
   process: ShopProcess;

@@ -7,6 +7,7 @@ import { assembleLinePrice, bakeFor, checkFinishCharges, checkRates, commonCompo
 import { runArea } from '../run-checks';
 import { num } from '../calculator';
 import type { FamilyCalculator, ProcessFamily } from '../types';
+import { windowsOf } from './windows';
 import { PASSIVATION_METHODS, PASSIVATION_TEMPLATES } from './bath';
 
 /** ASTM A967's verification practices (names as the standard gives them). */
@@ -38,7 +39,7 @@ function price(input: PricingInput, params: PassivationParams) {
   checkRates(rates);
   checkFinishCharges(finish);
   if (!Number.isSafeInteger(input.quantity) || input.quantity < 1) throw new PlatingInputError('quantity', 'The quantity must be a whole number of at least 1.');
-  const verdict = checkPassivation({ windowId: params.windowId, temperatureC: params.temperatureC, minutes: params.minutes, concentration: params.concentration });
+  const verdict = checkPassivation({ windowId: params.windowId, temperatureC: params.temperatureC, minutes: params.minutes, concentration: params.concentration }, windowsOf(input.familyData));
   if (!verdict.ok) throw new PlatingInputError('finishId', `The finish's own conditions are outside the window: ${verdict.broken.join(' ')}`);
   const partsPerLoad = Math.min(finish.partsPerLoad, input.quantity);
   const loads = Math.ceil(input.quantity / partsPerLoad);
@@ -79,8 +80,8 @@ export const PASSIVATION_CALCULATOR = {
     { name: 'concentration', label: 'Acid concentration', kind: 'number', unit: '%', initial: 25 },
     { name: 'loads', label: 'Loads in the lot', kind: 'number', unit: 'loads', initial: 4 },
   ],
-  compute(v: Record<string, number | string>) {
-    const verdict = checkPassivation({ windowId: String(v.windowId), temperatureC: num(v.temperatureC), minutes: num(v.minutes), concentration: num(v.concentration) });
+  compute(v: Record<string, number | string>, familyData?: Record<string, unknown>) {
+    const verdict = checkPassivation({ windowId: String(v.windowId), temperatureC: num(v.temperatureC), minutes: num(v.minutes), concentration: num(v.concentration) }, windowsOf(familyData));
     const loads = num(v.loads);
     if (!(loads >= 1) || !Number.isInteger(loads)) throw new PlatingInputError('loads', 'Loads must be a whole number of at least 1.');
     const figures: FamilyFigure[] = [
@@ -126,7 +127,7 @@ export const passivation: ProcessFamily<PassivationParams> = {
     const { temperatureC, concentration } = input.conditions;
     if (temperatureC === undefined) throw new PlatingInputError('temperature', 'Enter the bath temperature read at the tank.');
     if (concentration === undefined) throw new PlatingInputError('concentration', 'Enter the acid concentration of the latest analysis.');
-    const verdict = checkPassivation({ windowId: params.windowId, temperatureC, minutes: input.minutesPerLoad, concentration });
+    const verdict = checkPassivation({ windowId: params.windowId, temperatureC, minutes: input.minutesPerLoad, concentration }, windowsOf(input.familyData));
     return { platedAreaDm2: area, averageThicknessUm: 0, minimumThicknessUm: 0, requiredMinimumUm: 0, isBelowMinimum: false, outsideWindow: verdict.ok ? [] : verdict.broken };
   },
   tankServes: (tank, finish) => tank.templateId === (windowFor(finish.params.windowId)?.acid === 'citric' ? 'citric-passivation' : 'nitric-passivation'),

@@ -7,6 +7,7 @@ import { db } from '@/db';
 import { findBathAges } from '@/lib/bath/bath-age';
 import { recordAddition } from '@/lib/bath/record';
 import { updateTankSettings } from '@/lib/bath/tank-settings';
+import { savePassivationWindow } from '@/lib/families/passivation/windows-store';
 import { findCostedOrders, getJobCost } from '@/lib/orders/job-cost';
 import { logPlatingRun, type RunInput } from '@/lib/orders/runs';
 import { changeWorkOrderState } from '@/lib/orders/states';
@@ -114,6 +115,28 @@ describe('runs by family', () => {
     expect(nc.description).toBe('Run on P-NT1 outside the process window: 20 min is shorter than the 30 min ASTM A967 Nitric 2 needs at 21–32 °C.');
     // Missing the concentration is a field error, and nothing is stored.
     expect(await errorOf(logPlatingRun(plater, run(wo, await tankId('P-NT1'), { temperature: 25, concentration: undefined })))).toBe('BAD_INPUT: Enter the acid concentration of the latest analysis.');
+  });
+});
+
+describe("the shop's passivation windows", () => {
+  it('an edited window is what runs are judged by, and a bad edit is refused with nothing saved', async () => {
+    const supervisor = await sessionUser(SUPERVISOR);
+    const plater = await sessionUser(PLATER);
+    const before = await db.selectFrom('settings').select('value').where('key', '=', 'passivation_windows').executeTakeFirst();
+    expect(await errorOf(savePassivationWindow(supervisor, { id: 'a967-nitric-2', concentration: { min: 30, max: 20 }, bands: [{ minC: 21, maxC: 32, minMinutes: 30 }], source: 'x' }))).toBe('BAD_INPUT: Check the highlighted figures; nothing was saved.');
+    expect((await db.selectFrom('settings').select('value').where('key', '=', 'passivation_windows').executeTakeFirst())?.value).toEqual(before?.value);
+    expect(await errorOf(savePassivationWindow(plater, { id: 'a967-nitric-2' }))).toBe('FORBIDDEN: You are not allowed to do this.');
+    // The customer's own specification asks 45 min in the lowest band.
+    await savePassivationWindow(supervisor, { id: 'a967-nitric-2', concentration: { min: 20, max: 45 }, bands: [{ minC: 21, maxC: 32, minMinutes: 45 }, { minC: 38, maxC: 52, minMinutes: 20 }, { minC: 49, maxC: 60, minMinutes: 10 }], source: 'Customer specification PS-12 rev C' });
+    try {
+      const wo = await order('NGF-SS-0612', 'PS-A967-N2', 100);
+      const r = await logPlatingRun(plater, run(wo, await tankId('P-NT1'), { minutesPerLoad: 30, temperature: 25, concentration: 25, partsPerLoad: 100 }));
+      expect(r.prediction!.outsideWindow).toEqual(['30 min is shorter than the 45 min ASTM A967 Nitric 2 needs at 21–32 °C.']);
+      expect(r.nonconformanceId).not.toBeNull();
+    } finally {
+      // Back to the standard's figures for the other tests.
+      await db.deleteFrom('settings').where('key', '=', 'passivation_windows').execute();
+    }
   });
 });
 

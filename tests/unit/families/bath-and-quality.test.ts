@@ -167,3 +167,22 @@ describe('the finish form by family', () => {
     );
   });
 });
+
+describe("the shop's passivation windows", () => {
+  it('replaces a default by a valid edit, keeps the rest, and ignores a stored window that makes no sense', async () => {
+    const { windowsInForce, windowsOf } = await import('@/lib/families/passivation/windows');
+    const { checkPassivation } = await import('@/lib/plating');
+    const edited = windowsInForce([
+      { id: 'a967-nitric-2', concentration: { min: 20, max: 30 }, bands: [{ minC: 21, maxC: 32, minMinutes: 45 }], source: 'Customer spec PS-12 rev C' },
+      { id: 'a967-citric-1', concentration: { min: 10, max: 4 }, bands: [{ minC: 60, maxC: 71, minMinutes: 4 }], source: 'upside down' },
+    ]);
+    const n2 = edited.find((w) => w.id === 'a967-nitric-2')!;
+    expect(n2).toMatchObject({ standard: 'ASTM A967', treatment: 'Nitric 2', concentration: { min: 20, max: 30, unit: 'vol %' }, source: 'Customer spec PS-12 rev C' });
+    expect(edited.find((w) => w.id === 'a967-citric-1')!.concentration).toEqual({ min: 4, max: 10, unit: 'wt %' }); // the bad edit is not used
+    // 30 min at 25 °C passes the standard's default and fails the shop's stricter 45 min.
+    const lot = { windowId: 'a967-nitric-2', temperatureC: 25, minutes: 30, concentration: 25 };
+    expect(checkPassivation(lot).ok).toBe(true);
+    expect(checkPassivation(lot, windowsOf({ passivationWindows: edited })).ok).toBe(false);
+    expect(windowsOf(undefined).length).toBe(4);
+  });
+});

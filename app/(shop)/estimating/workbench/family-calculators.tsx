@@ -4,12 +4,13 @@ import { useMemo, useState } from 'react';
 import { FamilyFigures } from '@/components/family-figures/family-figures';
 import { NumberField, SelectField } from '@/components/ui/field';
 import { Tabs } from '@/components/ui/tabs';
+import type { ProcessFamilyId } from '@/db/types';
 import { FAMILIES } from '@/lib/families';
 import type { FamilyCalculator } from '@/lib/families/types';
 import { displayUnit, fromStorage, PlatingInputError, toStorage, UNITS, type UnitSystem } from '@/lib/plating';
 
 /** One calculator: its inputs in the user's units, its figures recomputed on every keystroke. */
-function Calculator({ calc, system }: { calc: FamilyCalculator; system: UnitSystem }) {
+function Calculator({ calc, system, familyData }: { calc: FamilyCalculator; system: UnitSystem; familyData: Record<string, unknown> | undefined }) {
   const [text, setText] = useState<Record<string, string>>(() =>
     Object.fromEntries(
       calc.inputs.map((i) => [i.name, typeof i.initial === 'number' && i.quantity ? String(Number(fromStorage(i.initial, displayUnit(i.quantity, system)).toPrecision(4))) : String(i.initial)]),
@@ -23,12 +24,12 @@ function Calculator({ calc, system }: { calc: FamilyCalculator; system: UnitSyst
       else values[i.name] = i.quantity ? toStorage(Number(t), displayUnit(i.quantity, system)) : Number(t);
     }
     try {
-      return { ok: true as const, ...calc.compute(values) };
+      return { ok: true as const, ...calc.compute(values, familyData) };
     } catch (err) {
       const field = err instanceof PlatingInputError ? err.field : null;
       return { ok: false as const, field, message: err instanceof Error ? err.message : 'Check the numbers.' };
     }
-  }, [calc, text, system]);
+  }, [calc, text, system, familyData]);
   return (
     <div className="grid gap-4 lg:grid-cols-[minmax(0,22rem)_1fr]">
       <div className="grid gap-3 sm:grid-cols-2 lg:grid-cols-1">
@@ -68,7 +69,7 @@ function Calculator({ calc, system }: { calc: FamilyCalculator; system: UnitSyst
 }
 
 /** The other families' quick calculations beside the plating workbench. */
-export function FamilyCalculators({ system }: { system: UnitSystem }) {
-  const calcs = FAMILIES.flatMap((f) => f.calculators.map((c) => ({ id: `${f.id}-${c.title}`, c })));
-  return <Tabs label="Process calculators" tabs={calcs.map(({ id, c }) => ({ id, label: c.title, content: <Calculator calc={c} system={system} /> }))} />;
+export function FamilyCalculators({ system, familyData }: { system: UnitSystem; familyData: Partial<Record<ProcessFamilyId, Record<string, unknown>>> }) {
+  const calcs = FAMILIES.flatMap((f) => f.calculators.map((c) => ({ id: `${f.id}-${c.title}`, c, data: familyData[f.id] })));
+  return <Tabs label="Process calculators" tabs={calcs.map(({ id, c, data }) => ({ id, label: c.title, content: <Calculator calc={c} system={system} familyData={data} /> }))} />;
 }

@@ -6,6 +6,7 @@ import { EmptyState } from '@/components/ui/empty-state';
 import { PageHeader } from '@/components/ui/page-header';
 import { requirePageUser } from '@/lib/auth/current-user';
 import { familyParams, getFamily } from '@/lib/families';
+import { getFamilyData } from '@/lib/families/shop-data-queries';
 import { findTanksForFinish, getWorkOrder } from '@/lib/orders/queries';
 import { formatStoredQuantity } from '@/lib/plating';
 import { RunForm } from './run-form';
@@ -22,6 +23,7 @@ export default async function LogRunPage({ params }: { params: Promise<{ workOrd
   if (!wo) notFound();
   const tanks = await findTanksForFinish(wo);
   const family = getFamily(wo.family);
+  const familyData = await getFamilyData(family.id);
   const open = wo.state === 'received' || wo.state === 'in_process';
   return (
     <div className="mx-auto flex max-w-lg flex-col gap-4">
@@ -40,6 +42,7 @@ export default async function LogRunPage({ params }: { params: Promise<{ workOrd
           workOrderId={wo.id}
           units={user.unitSystem}
           tanks={tanks.map((t) => ({ id: t.id, code: t.code, name: t.name, efficiency: t.efficiency, rectifierMaxA: t.rectifierMaxA, hasAhMeter: t.hasAhMeter, settings: t.familySettings }))}
+          familyData={familyData}
           finish={{
             family: family.id, params: familyParams(family.id, wo.family_params), element: wo.element, ionCharge: wo.ion_charge, distributionRatio: wo.distribution_ratio,
             minThicknessUm: wo.min_thickness_um, areaPerPartDm2: wo.area_dm2, partsPerLoad: Math.min(wo.parts_per_load, wo.quantity_received || wo.quantity_ordered),

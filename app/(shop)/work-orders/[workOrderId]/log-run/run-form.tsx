@@ -31,7 +31,7 @@ function newKey(): string {
 }
 
 /** The figures the finish's family predicts from what is typed so far, or the reason it cannot yet. */
-function usePrediction(v: Record<string, string>, finish: RunFinish, tank: RunTank | undefined, units: UnitSystem) {
+function usePrediction(v: Record<string, string>, finish: RunFinish, tank: RunTank | undefined, units: UnitSystem, familyData: Record<string, unknown>) {
   return useMemo(() => {
     const family = getFamily(finish.family);
     if (!tank) return { ok: false, error: 'Choose the tank.' } as const;
@@ -53,7 +53,7 @@ function usePrediction(v: Record<string, string>, finish: RunFinish, tank: RunTa
         ...(v.concentration ? { concentration: num(v.concentration) } : {}),
       };
       const p = family.predictRun(
-        { ampHours, minutesPerLoad, loads, partsPerLoad, areaPerPartDm2: finish.areaPerPartDm2, finish, tank: { efficiency: tank.efficiency, settings: tank.settings }, conditions },
+        { ampHours, minutesPerLoad, loads, partsPerLoad, areaPerPartDm2: finish.areaPerPartDm2, finish, tank: { efficiency: tank.efficiency, settings: tank.settings }, conditions, familyData },
         finish.params,
       );
       const density = ampHours !== null && v.mode === 'amps' ? runCurrentDensity(num(v.currentA), partsPerLoad, finish.areaPerPartDm2) : null;
@@ -61,10 +61,10 @@ function usePrediction(v: Record<string, string>, finish: RunFinish, tank: RunTa
     } catch (err) {
       return { ok: false, error: err instanceof Error ? err.message : 'Check the numbers.' } as const;
     }
-  }, [v, finish, tank, units]);
+  }, [v, finish, tank, units, familyData]);
 }
 
-export function RunForm({ workOrderId, tanks, finish, units }: { workOrderId: string; tanks: RunTank[]; finish: RunFinish; units: UnitSystem }) {
+export function RunForm({ workOrderId, tanks, finish, units, familyData }: { workOrderId: string; tanks: RunTank[]; finish: RunFinish; units: UnitSystem; familyData: Record<string, unknown> }) {
   const [state, action] = useActionState(logRunAction, initialFormState);
   const [key, setKey] = useState('');
   const family = getFamily(finish.family);
@@ -85,7 +85,7 @@ export function RunForm({ workOrderId, tanks, finish, units }: { workOrderId: st
   }, [state, key]);
   const set = (name: string) => (e: { target: { value: string } }) => setV((old) => ({ ...old, [name]: e.target.value }));
   const tank = tanks.find((t) => t.id === v.tankId);
-  const pred = usePrediction(v, finish, tank, units);
+  const pred = usePrediction(v, finish, tank, units, familyData);
   const below = pred.ok && pred.p.isBelowMinimum;
   const outside = pred.ok ? pred.p.outsideWindow : [];
   const tempUnit = displayUnit('temperature', units);
