@@ -47,7 +47,7 @@ export default async function BathsBoardPage() {
                       </span>
                       <VerdictBadge verdict={t.worst} />
                     </span>
-                    <span className="text-xs text-ink-muted">{t.templateName}</span>
+                    {t.templateName !== t.name ? <span className="text-xs text-ink-muted">{t.templateName}</span> : null}
                     {t.age ? (
                       <span className={`text-sm ${t.age.atEndOfLife ? 'font-semibold text-out' : 'text-ink'}`}>
                         {t.age.atEndOfLife ? '▲ ' : ''}Bath age: {t.age.text}

@@ -1,6 +1,6 @@
 // Test data for billing: shipped work orders of the demo customers, numbered from the real
 // counter, and the demo users as the app sees them when signed in.
-import { sql, type Kysely } from 'kysely';
+import type { Kysely } from 'kysely';
 import { db as appDb } from '@/db';
 import type { Database, PricingBasis, WorkOrderState } from '@/db/types';
 import type { SessionUser } from '@/lib/auth/current-user';
@@ -63,11 +63,6 @@ export async function makeOrder(spec: OrderSpec, database: Kysely<Database> = ap
 export async function sessionUser(email: string, database: Kysely<Database> = appDb): Promise<SessionUser> {
   const u = await database.selectFrom('users').selectAll().where('email', '=', email).executeTakeFirstOrThrow();
   return { id: u.id, email: u.email, name: u.name, role: u.role, customerId: u.customer_id, unitSystem: u.unit_system, isActive: u.is_active };
-}
-
-export async function hasNonconformanceTable(database: Kysely<Database> = appDb): Promise<boolean> {
-  const r = await sql<{ name: string | null }>`select to_regclass('public.nonconformances')::text as name`.execute(database);
-  return !!r.rows[0]?.name;
 }
 
 export async function lastSeq(series: 'invoice' | 'credit_note', year: number, database: Kysely<Database> = appDb): Promise<number> {

@@ -63,14 +63,16 @@ export function CostBuildUp({ price, units, caption, quantity }: { price: LinePr
               </Td>
               <Td numeric>{price.minimumApplied ? <>raised to <Money cents={price.minimumChargeCents} /></> : 'not reached'}</Td>
             </Tr>
-            <Tr>
-              <Td>Rush</Td>
-              <Td />
-              <Td numeric>× {price.rushMultiplierPct} %</Td>
-              <Td numeric>
-                <Money cents={price.rushCents} />
-              </Td>
-            </Tr>
+            {price.rushMultiplierPct !== 100 ? (
+              <Tr>
+                <Td>Rush</Td>
+                <Td />
+                <Td numeric>× {price.rushMultiplierPct} %</Td>
+                <Td numeric>
+                  <Money cents={price.rushCents} />
+                </Td>
+              </Tr>
+            ) : null}
           </>
         }
         footer={
