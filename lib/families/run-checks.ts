@@ -1,11 +1,7 @@
 // Checks shared by every family's run prediction. Pure.
+import { wholePositive } from '@/lib/orders/run-math';
 import { PlatingInputError } from '@/lib/plating';
 import type { FamilyRunInput, FamilyRunPrediction } from './types';
-
-export function wholePositive(field: string, label: string, v: unknown, max: number): number {
-  if (typeof v !== 'number' || !Number.isInteger(v) || v < 1 || v > max) throw new PlatingInputError(field, `${label} must be a whole number from 1 to ${max}.`);
-  return v;
-}
 
 /** Plated area of the run, checked. */
 export function runArea(input: FamilyRunInput): number {

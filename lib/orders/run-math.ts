@@ -14,7 +14,7 @@ function positive(field: string, label: string, v: unknown): number {
   return v;
 }
 
-function wholePositive(field: string, label: string, v: unknown, max: number): number {
+export function wholePositive(field: string, label: string, v: unknown, max: number): number {
   if (typeof v !== 'number' || !Number.isInteger(v) || v < 1 || v > max) throw new PlatingInputError(field, `${label} must be a whole number from 1 to ${max}.`);
   return v;
 }

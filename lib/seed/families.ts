@@ -4,7 +4,7 @@
 // passivated lot waiting for its verification test (so its certificate is refused). Idempotent:
 // an audit-log marker says the set is loaded.
 import type { Kysely } from 'kysely';
-import type { Database, Role } from '@/db/types';
+import type { Database } from '@/db/types';
 import { acceptQuote, markQuoteSent } from '@/lib/quotes/lifecycle';
 import { changeWorkOrderState } from '@/lib/orders/states';
 import type { Actor as QualityActor } from '@/lib/quality/access';
@@ -13,24 +13,12 @@ import { lotSample } from '@/lib/quality/lot-checks';
 import { loadLot } from '@/lib/quality/lot';
 import { recordProcessRecord } from '@/lib/quality/process/records';
 import { recordReadings } from '@/lib/quality/thickness';
+import { actor as qualityActor, readingsFor } from './quality';
 import { actor, backdate, draftQuote, runOrder } from './quotes';
 
 const MARKER = 'seed.families';
 const DAY = 86_400_000;
 const HOUR = 3_600_000;
-
-async function qualityActor(db: Kysely<Database>, role: Role): Promise<QualityActor> {
-  return db.selectFrom('users').select(['id', 'name', 'role', 'is_active as isActive']).where('role', '=', role).where('is_active', '=', true).orderBy('created_at').executeTakeFirstOrThrow();
-}
-
-// A fixed sequence, so every demo database gets the same readings.
-function readings(count: number, centreUm: number, spreadUm: number, seed: number): number[] {
-  let x = seed;
-  return Array.from({ length: count }, () => {
-    x = (x * 1103515245 + 12345) % 2 ** 31;
-    return Math.round((centreUm + ((x / 2 ** 31) * 2 - 1) * spreadUm) * 100) / 100;
-  });
-}
 
 async function inspectAndCertify(db: Kysely<Database>, workOrderId: string, supervisor: QualityActor, when: Date) {
   await db.transaction().execute((trx) => changeWorkOrderState(trx, { workOrderId, to: 'inspected', actorId: supervisor.id, note: 'Quality records complete' }));
@@ -44,6 +32,7 @@ export async function seedFamilies(db: Kysely<Database>): Promise<void> {
   const halvorsen = await actor(db, 'quality@halvorsen-valve.test');
   const northgate = await actor(db, 'buyer@northgate-fastener.test');
   const [plater, supervisor] = [await qualityActor(db, 'plater'), await qualityActor(db, 'supervisor')];
+  if (!plater || !supervisor) return;
   const now = Date.now();
   const ago = (days: number) => new Date(now - days * DAY);
   const made: string[] = [];
@@ -57,7 +46,7 @@ export async function seedFamilies(db: Kysely<Database>): Promise<void> {
   {
     const lot = (await loadLot(db, enOrder))!;
     const n = lotSample(lot).sampleSize;
-    await recordReadings(plater, { workOrderId: enOrder, entry: 'manual', readings: readings(n, 27.5, 1.5, 41).map((t, k) => ({ partNo: k + 1, location: k % 2 ? 'bore' : 'flange face', method: 'B568', thicknessUm: t })) }, db);
+    await recordReadings(plater, { workOrderId: enOrder, entry: 'manual', readings: readingsFor(n, 27.5, 1.5, 41).map((t, k) => ({ partNo: k + 1, location: k % 2 ? 'bore' : 'flange face', method: 'B568', thicknessUm: t })) }, db);
     await recordProcessRecord(supervisor, { kind: 'phosphorus_content', workOrderId: enOrder, method: 'xrf', phosphorusWtPct: 8.3, minPct: 5, maxPct: 9, notes: 'Witness coupon from the same load.' }, db);
     await inspectAndCertify(db, enOrder, supervisor, new Date(ago(9).getTime() + 3 * HOUR));
   }
@@ -71,7 +60,7 @@ export async function seedFamilies(db: Kysely<Database>): Promise<void> {
   {
     const lot = (await loadLot(db, anOrder))!;
     const n = lotSample(lot).sampleSize;
-    await recordReadings(plater, { workOrderId: anOrder, entry: 'manual', readings: readings(n, 14, 2.5, 53).map((t, k) => ({ partNo: k + 1, location: 'side face', method: 'B244', thicknessUm: t })) }, db);
+    await recordReadings(plater, { workOrderId: anOrder, entry: 'manual', readings: readingsFor(n, 14, 2.5, 53).map((t, k) => ({ partNo: k + 1, location: 'side face', method: 'B244', thicknessUm: t })) }, db);
     await recordProcessRecord(supervisor, { kind: 'seal_test', workOrderId: anOrder, method: 'dye_spot', result: 1, limit: 2, notes: '' }, db);
     await inspectAndCertify(db, anOrder, supervisor, new Date(ago(5).getTime() + 2 * HOUR));
   }

@@ -17,12 +17,12 @@ import { recordReadings } from '@/lib/quality/thickness';
 const MARKER = 'seed.quality';
 const HOUR = 3_600_000;
 
-async function actor(db: Kysely<Database>, role: Role): Promise<Actor | undefined> {
+export async function actor(db: Kysely<Database>, role: Role): Promise<Actor | undefined> {
   return db.selectFrom('users').select(['id', 'name', 'role', 'is_active as isActive']).where('role', '=', role).where('is_active', '=', true).orderBy('created_at').executeTakeFirst();
 }
 
 // A fixed pseudo-random sequence, so every demo database gets the same readings.
-function readingsFor(count: number, centreUm: number, spreadUm: number, seed: number): number[] {
+export function readingsFor(count: number, centreUm: number, spreadUm: number, seed: number): number[] {
   let x = seed;
   return Array.from({ length: count }, () => {
     x = (x * 1103515245 + 12345) % 2 ** 31;
