@@ -38,6 +38,8 @@ export type FloorTank = {
   hasAhMeter: boolean;
   templateName: string;
   hazards: Hazard[];
+  /** A Hull cell panel tells something only of a bath that plates metal by current. */
+  takesHullCell: boolean;
   analytes: FloorAnalyte[];
 };
 
@@ -76,6 +78,7 @@ export async function getFloorTank(where: { code: string } | { id: string }, exe
     hasAhMeter: tank.has_ah_meter,
     templateName: template?.name ?? tank.template_id,
     hazards: template?.hazards ?? [],
+    takesHullCell: !!template?.deposit,
     analytes: analytes.map(toFloorAnalyte),
   };
 }

@@ -63,7 +63,7 @@ export default async function FloorTankPage({ params }: { params: Promise<{ code
         {tank.hasAhMeter ? (
           <LinkButton size="lg" variant="secondary" href={`/floor/tanks/${tank.code}/meter`}>Amp-hour meter reading</LinkButton>
         ) : null}
-        <LinkButton size="lg" variant="secondary" href={`/floor/tanks/${tank.code}/hull-cell`}>Hull cell panel</LinkButton>
+        {tank.takesHullCell ? <LinkButton size="lg" variant="secondary" href={`/floor/tanks/${tank.code}/hull-cell`}>Hull cell panel</LinkButton> : null}
         <LinkButton size="lg" variant="ghost" href={`/floor/tanks/${tank.code}/label`}>Print this tank&apos;s QR label</LinkButton>
       </section>
     </div>
