@@ -8,6 +8,7 @@ import { excessCents, openBalanceCents } from './arithmetic';
 import { lockInvoice, refreshInvoiceBalance } from './balance';
 import { recordCardRefund } from './card-payments';
 import { getPaymentException } from './exceptions';
+import { invoiceExcessSql } from './queries';
 import type { ApplyCreditInput, RefundExcessInput, ResolveExceptionInput } from './schemas';
 import Stripe from 'stripe';
 import { paymentServiceError, stripeClient } from './stripe';
@@ -27,12 +28,12 @@ export type CustomerCredit = { customerId: string; creditCents: number; invoices
 /** A customer's credit on account, invoice by invoice. */
 export async function customerCredit(customerId: string, database: Kysely<Database> = defaultDb): Promise<CustomerCredit> {
   const rows = await database
-    .selectFrom('invoices')
-    .select(['id', 'number', sql<number>`(paid_cents + credited_cents - total_cents)::bigint`.as('excess')])
-    .where('customer_id', '=', customerId)
-    .where('status', '=', 'overpaid')
-    .orderBy('issued_on')
-    .orderBy('number')
+    .selectFrom('invoices as i')
+    .select(['i.id', 'i.number', sql<number>`${invoiceExcessSql}::bigint`.as('excess')])
+    .where('i.customer_id', '=', customerId)
+    .where('i.status', '=', 'overpaid')
+    .orderBy('i.issued_on')
+    .orderBy('i.number')
     .execute();
   const invoices = rows.map((r) => ({ id: r.id, number: r.number, excessCents: Number(r.excess) }));
   return { customerId, creditCents: invoices.reduce((s, i) => s + i.excessCents, 0), invoices };

@@ -120,6 +120,9 @@ export async function findReminders(invoiceId: string, database: Kysely<Database
   return database.selectFrom('invoice_reminders').selectAll().where('invoice_id', '=', invoiceId).orderBy('sent_at').execute();
 }
 
+/** What an overpaid invoice (alias "i") holds beyond its balance: its part of the customer's credit on account. */
+export const invoiceExcessSql = sql<number>`(i.paid_cents + i.credited_cents - i.total_cents)`;
+
 export type ReceivablesReport = AgingReport & { credits: { customerId: string; customerName: string; creditCents: number }[]; creditCents: number };
 
 /** The aging of what is owed, beside each customer's credit on account (overpayments not yet refunded or applied). */
@@ -129,7 +132,7 @@ export async function receivablesReport(asOf: string = todayIso(), database: Kys
     database
       .selectFrom('invoices as i')
       .innerJoin('customers as c', 'c.id', 'i.customer_id')
-      .select(['i.customer_id', 'c.name', sql<number>`sum(i.paid_cents + i.credited_cents - i.total_cents)::bigint`.as('credit')])
+      .select(['i.customer_id', 'c.name', sql<number>`sum(${invoiceExcessSql})::bigint`.as('credit')])
       .where('i.status', '=', 'overpaid')
       .groupBy(['i.customer_id', 'c.name'])
       .orderBy('c.name')
