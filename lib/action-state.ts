@@ -5,6 +5,8 @@ export type FormState = {
   fieldErrors?: Record<string, string[]>;
   // The submitted text values (never passwords), so the form keeps what the user typed.
   values?: Record<string, string>;
+  // Recovery codes of a second factor, shown once when they are made.
+  codes?: string[];
 };
 
 export const initialFormState: FormState = {};

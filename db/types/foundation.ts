@@ -30,9 +30,32 @@ export type UsersTable = {
   is_active: Generated<boolean>;
   created_at: GeneratedTimestamp;
   updated_at: GeneratedTimestamp;
+  // 2026_12_03_1100_harden_sign_in
+  totp_secret: string | null;
+  totp_enabled_at: TimestampNullable;
+  totp_last_step: number | null;
 };
 
-export type SessionsTable = { id: string; user_id: string; expires_at: Timestamp };
+export type SessionsTable = {
+  id: string;
+  user_id: string;
+  expires_at: Timestamp;
+  second_factor: Generated<boolean>;
+  second_factor_failures: Generated<number>;
+};
+
+export type RecoveryCodesTable = { code_hash: string; user_id: string; used_at: TimestampNullable; created_at: GeneratedTimestamp };
+
+export type KnownDevicesTable = {
+  token_hash: string;
+  user_id: string;
+  user_agent: Generated<string>;
+  ip: Generated<string>;
+  created_at: GeneratedTimestamp;
+  last_seen_at: GeneratedTimestamp;
+};
+
+export type SignInNoticesTable = { email_key: string; sent_at: GeneratedTimestamp };
 
 export type PasswordTokensTable = {
   token_hash: string;
@@ -47,6 +70,7 @@ export type SignInAttemptsTable = {
   id: Generated<number>;
   email_key: string;
   ip: string;
+  client_key: string;
   succeeded: boolean;
   created_at: GeneratedTimestamp;
 };
@@ -80,6 +104,9 @@ export type FoundationTables = {
   sessions: SessionsTable;
   password_tokens: PasswordTokensTable;
   sign_in_attempts: SignInAttemptsTable;
+  recovery_codes: RecoveryCodesTable;
+  known_devices: KnownDevicesTable;
+  sign_in_notices: SignInNoticesTable;
   emails: EmailsTable;
   audit_log: AuditLogTable;
   settings: SettingsTable;

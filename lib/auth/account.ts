@@ -7,7 +7,8 @@ import { AppError } from '@/lib/errors';
 import { appUrl, sendEmail } from '@/lib/email/mailer';
 import { lucia } from './lucia';
 import { dummyPasswordHash, hashPassword, verifyPassword } from './password';
-import { recordSignInAttempt, signInBlockedFor } from './rate-limit';
+import { knownDeviceHash } from './devices';
+import { type Client, clearSignInFailures, recordSignInAttempt, signInWaitSeconds, waitMessage } from './throttle';
 import { ROLE_LABELS } from './roles';
 import { checkPasswordToken, hashToken, issuePasswordToken } from './tokens';
 import type { SessionUser } from './current-user';
@@ -15,23 +16,33 @@ import type { SessionUser } from './current-user';
 // The one message for a failed sign-in: it never says whether the account exists.
 export const SIGN_IN_FAILED = 'That e-mail address and password do not match an active account.';
 
-export async function signIn(email: string, password: string, ip: string): Promise<{ sessionId: string; role: Role }> {
-  const blockedMinutes = await signInBlockedFor(email, ip);
-  if (blockedMinutes) {
-    throw new AppError('RATE_LIMITED', `Too many failed sign-in attempts. Try again in ${blockedMinutes} minute${blockedMinutes === 1 ? '' : 's'}.`);
-  }
+export type SignInClient = { ip: string; deviceToken?: string };
+export type SignInResult = {
+  sessionId: string;
+  role: Role;
+  /** what the session still owes before it reaches anything (lib/auth/current-user.ts) */
+  next: 'done' | 'verify' | 'enrol';
+  user: { id: string; email: string; name: string };
+};
+
+export async function signIn(email: string, password: string, from: SignInClient): Promise<SignInResult> {
+  const device = await knownDeviceHash(email, from.deviceToken);
+  const client: Client = device ? { key: `device:${device}`, ip: from.ip, known: true } : { key: `ip:${from.ip}`, ip: from.ip, known: false };
+  const wait = await signInWaitSeconds(email, client);
+  if (wait > 0) throw new AppError('RATE_LIMITED', waitMessage(wait));
   const user = await db
     .selectFrom('users')
-    .select(['id', 'role', 'password_hash', 'is_active'])
+    .select(['id', 'name', 'role', 'password_hash', 'is_active', 'totp_enabled_at'])
     .where('email', '=', email)
     .executeTakeFirst();
   // Verify against a dummy hash when there is no usable account, so timing reveals nothing.
   const ok = await verifyPassword(user?.password_hash ?? (await dummyPasswordHash()), password);
   const usable = !!user && !!user.password_hash && user.is_active && ok;
-  await recordSignInAttempt(email, ip, usable);
+  await recordSignInAttempt(email, client, usable);
   if (!usable || !user) throw new AppError('UNAUTHENTICATED', SIGN_IN_FAILED);
-  const session = await lucia.createSession(user.id, {});
-  return { sessionId: session.id, role: user.role };
+  const next = user.totp_enabled_at ? 'verify' : user.role === 'owner' ? 'enrol' : 'done';
+  const session = await lucia.createSession(user.id, { second_factor: false, second_factor_failures: 0 });
+  return { sessionId: session.id, role: user.role, next, user: { id: user.id, email, name: user.name } };
 }
 
 export async function requestPasswordReset(email: string): Promise<void> {
@@ -66,6 +77,10 @@ export async function setPasswordWithToken(token: string, password: string): Pro
     await trx.deleteFrom('sessions').where('user_id', '=', used.user_id).execute();
     await trx.insertInto('audit_log').values({ actor_id: used.user_id, action: `password.${check.purpose === 'invite' ? 'set' : 'reset'}`, entity: 'user', entity_id: used.user_id }).execute();
     return { email: check.email };
+  }).then(async (r) => {
+    // The link proved the mailbox: strangers' failures no longer slow the account holder.
+    await clearSignInFailures(r.email);
+    return r;
   });
 }
 

@@ -9,9 +9,19 @@ import { AppError } from '@/lib/errors';
 
 export type SessionUser = User;
 
-// Who is signed in. Cached per request; refreshes or clears the cookie where the framework allows
-// it (setting a cookie throws while a Server Component renders, which is harmless here).
-export const getSession = cache(async (): Promise<{ user: User; session: Session } | { user: null; session: null }> => {
+/**
+ * What a session still lacks: the code of an enrolled second factor ('verify'), or, for an owner,
+ * setting one up ('enrol'). Until then the session reaches nothing but those two pages.
+ */
+export function missingStep(user: Pick<User, 'role'>, session: Pick<Session, 'secondFactor' | 'userHasTwoFactor'>): 'verify' | 'enrol' | null {
+  if (session.secondFactor) return null;
+  if (session.userHasTwoFactor) return 'verify';
+  if (user.role === 'owner') return 'enrol';
+  return null;
+}
+
+/** Any session cookie, complete or not (sign-out ends either). */
+export const validate = cache(async (): Promise<{ user: User; session: Session } | { user: null; session: null }> => {
   const jar = await cookies();
   const id = jar.get(lucia.sessionCookieName)?.value ?? null;
   if (!id) return { user: null, session: null };
@@ -30,6 +40,22 @@ export const getSession = cache(async (): Promise<{ user: User; session: Session
   }
   if (result.user && !result.user.isActive) return { user: null, session: null };
   return result;
+});
+
+/** A session that has given the password but still owes its second step, for the two pages that finish it. */
+export async function getPendingSignIn(): Promise<{ user: User; session: Session; step: 'verify' | 'enrol' } | null> {
+  const r = await validate();
+  if (!r.user) return null;
+  const step = missingStep(r.user, r.session);
+  return step ? { user: r.user, session: r.session, step } : null;
+}
+
+// Who is signed in, fully: a session still owing its second factor counts as signed out here.
+// Cached per request; refreshes or clears the cookie where the framework allows it.
+export const getSession = cache(async (): Promise<{ user: User; session: Session } | { user: null; session: null }> => {
+  const r = await validate();
+  if (!r.user || missingStep(r.user, r.session)) return { user: null, session: null };
+  return r;
 });
 
 export async function getCurrentUser(): Promise<SessionUser | null> {
@@ -52,7 +78,11 @@ export async function requirePermission(permission: Permission): Promise<Session
 // the 403 "not allowed" page and no data.
 export async function requirePageUser(permission: Permission, nextPath?: string): Promise<SessionUser> {
   const user = await getCurrentUser();
-  if (!user) redirect(nextPath ? `/sign-in?next=${encodeURIComponent(nextPath)}` : '/sign-in');
+  if (!user) {
+    const carry = nextPath ? `?next=${encodeURIComponent(nextPath)}` : '';
+    // A password-only session finishes its second step rather than starting over.
+    redirect((await getPendingSignIn()) ? `/two-factor${carry}` : `/sign-in${carry}`);
+  }
   if (!roleCan(user.role, permission)) forbidden();
   return user;
 }

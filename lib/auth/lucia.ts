@@ -1,6 +1,7 @@
 import 'server-only';
 import { type DatabaseSession, type DatabaseUser, Lucia } from 'lucia';
 import { NodePostgresAdapter } from '@lucia-auth/adapter-postgresql';
+import { sql } from 'kysely';
 import { db, pool } from '@/db';
 import type { Role, UnitSystem } from '@/db/types';
 
@@ -12,13 +13,14 @@ class SessionAdapter extends NodePostgresAdapter {
     const row = await db
       .selectFrom('sessions as s')
       .innerJoin('users as u', 'u.id', 's.user_id')
-      .select(['s.id', 's.user_id', 's.expires_at', 'u.email', 'u.name', 'u.role', 'u.customer_id', 'u.unit_system', 'u.is_active'])
+      .select(['s.id', 's.user_id', 's.expires_at', 's.second_factor', 's.second_factor_failures', 'u.email', 'u.name', 'u.role', 'u.customer_id', 'u.unit_system', 'u.is_active'])
+      .select(sql<boolean>`u.totp_enabled_at is not null`.as('two_factor'))
       .where('s.id', '=', sessionId)
       .executeTakeFirst();
     if (!row) return [null, null];
-    const { id, user_id, expires_at, ...attributes } = row;
+    const { id, user_id, expires_at, second_factor, second_factor_failures, two_factor, ...attributes } = row;
     return [
-      { id, userId: user_id, expiresAt: expires_at, attributes: {} },
+      { id, userId: user_id, expiresAt: expires_at, attributes: { second_factor, second_factor_failures, two_factor } },
       { id: user_id, attributes },
     ];
   }
@@ -33,6 +35,7 @@ export const lucia = new Lucia(sessionAdapter, {
     // Lucia always sets httpOnly; SameSite=Lax; Secure only when the app is served over https.
     attributes: { secure: (process.env.APP_URL ?? '').startsWith('https://'), sameSite: 'lax' },
   },
+  getSessionAttributes: (a) => ({ secondFactor: a.second_factor, userHasTwoFactor: !!a.two_factor }),
   // Pass on only what pages need.
   getUserAttributes: (a) => ({
     email: a.email,
@@ -55,5 +58,7 @@ declare module 'lucia' {
       unit_system: UnitSystem;
       is_active: boolean;
     };
+    // A session opened by the password alone has second_factor false (lib/auth/current-user.ts).
+    DatabaseSessionAttributes: { second_factor: boolean; second_factor_failures: number; two_factor?: boolean };
   }
 }

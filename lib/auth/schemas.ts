@@ -48,3 +48,18 @@ export const updateUserSchema = z.object({
 });
 
 export const unitSystemSchema = z.object({ unitSystem: z.enum(['metric', 'us'], { error: 'Choose metric or US units.' }) });
+
+// The second step of signing in: six digits from the app, or a recovery code (xxxxx-xxxxx).
+export const secondFactorSchema = z.object({
+  code: z.string({ error: 'Type the code.' }).trim().min(1, 'Type the 6-digit code, or a recovery code.').max(40, 'That is too long for a code.'),
+  next: z.string().max(500).optional(),
+});
+
+export const totpCodeSchema = z.object({
+  code: z
+    .string({ error: 'Type the code.' })
+    .trim()
+    .transform((v) => v.replace(/\s/g, ''))
+    .pipe(z.string().regex(/^\d{6}$/, 'Type the 6 digits your app shows.')),
+  next: z.string().max(500).optional(),
+});

@@ -4,6 +4,9 @@ import type { Database, Role } from '@/db/types';
 import { hashPassword } from '@/lib/auth/password';
 
 export const DEMO_PASSWORD = 'plating-demo-2026';
+/** The demo owner's authenticator key (base32, RFC 6238); invented for the demo and printed in the README. */
+export const DEMO_OWNER_TOTP_SECRET = 'KESTRELDEMOOWNERTOTPSECRET234567';
+export const DEMO_OWNER_ID = 'demo-owner-owner';
 
 export const DEMO_SHOP = {
   name: 'Kestrel Lane Plating',
@@ -85,4 +88,11 @@ export async function seedFoundation(db: Kysely<Database>): Promise<void> {
       .onConflict((oc) => oc.column('email').doUpdateSet({ password_hash: passwordHash, role: u.role, is_active: true }))
       .execute();
   }
+  // The owner must have a second factor; the demo owner's is this published key (README), whose
+  // current code `npm run demo:code` prints. Demo only: a real owner enrols their own app.
+  await db
+    .updateTable('users')
+    .set({ totp_secret: DEMO_OWNER_TOTP_SECRET, totp_enabled_at: sql`coalesce(totp_enabled_at, now())` })
+    .where('id', '=', DEMO_OWNER_ID)
+    .execute();
 }

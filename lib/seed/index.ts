@@ -21,4 +21,4 @@ export async function seedDemo(db: Kysely<Database>): Promise<void> {
   await seedFamilies(db); // the other lines' work, after billing so the invoices stay as they were
 }
 
-export { DEMO_PASSWORD, DEMO_USERS, DEMO_CUSTOMERS, DEMO_SHOP } from './foundation';
+export { DEMO_PASSWORD, DEMO_OWNER_TOTP_SECRET, DEMO_OWNER_ID, DEMO_USERS, DEMO_CUSTOMERS, DEMO_SHOP } from './foundation';

@@ -18,6 +18,9 @@ const PUBLIC: Record<string, 'page' | 'redirect' | 'json' | 'signature' | 'any-s
   'GET /api/health': 'json',
   'POST /api/webhooks/stripe': 'signature',
   'action signOutAction': 'any-session',
+  // The second step of signing in: they answer only a session that has passed the password.
+  'page /two-factor': 'redirect',
+  'page /two-factor/setup': 'redirect',
 };
 
 const pages = discoverPages();

@@ -169,6 +169,8 @@ const ACTION_FORMS: Record<string, { kind: Kind; field: string; fields: Record<s
   payInvoiceAction: { kind: 'invoice', field: 'invoiceId', fields: {}, refusal: /That invoice was not found\./ },
   changePasswordAction: 'takes no record id',
   setUnitSystemAction: 'takes no record id',
+  newRecoveryCodesAction: 'takes no record id',
+  turnOffSecondFactorAction: 'takes no record id',
 };
 const customerActions = actions.filter((a) => customerMay(a.guard));
 
@@ -262,7 +264,7 @@ async function prepare(code: Code): Promise<Company> {
   const contact = await one<{ name: string; email: string; customer_id: string }>('select name, email, customer_id from users where id = $1', [spec.userId]);
   const customerId = contact.customer_id;
   const session = randomBytes(20).toString('hex');
-  await pool.query(`insert into sessions (id, user_id, expires_at) values ($1, $2, now() + interval '1 hour')`, [session, spec.userId]);
+  await pool.query(`insert into sessions (id, user_id, expires_at, second_factor) values ($1, $2, now() + interval '1 hour', true)`, [session, spec.userId]);
   sessionIds.push(session);
 
   // A quote waiting on the contact and an invoice with an open balance: accepting, declining or

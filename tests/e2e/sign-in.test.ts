@@ -6,6 +6,8 @@ import { DEMO_PASSWORD } from '@/lib/seed';
 import { APP_URL, launchBrowser, screenshot, signInAs } from '../helpers/browser';
 import { firstLink, waitForMessage } from '../helpers/mailbox';
 import { TEST_DATABASE_URL } from '../helpers/test-db';
+import { nextCodeFor } from '../helpers/second-factor';
+import { Secret, TOTP } from 'otpauth';
 
 let browser: Browser;
 beforeAll(async () => {
@@ -113,6 +115,73 @@ describe('signing in', () => {
       const client = new pg.Client({ connectionString: TEST_DATABASE_URL });
       await client.connect();
       await client.query('update users set password_hash = $1 where email = $2', [await hashPassword(DEMO_PASSWORD), email]).finally(() => client.end());
+    }
+  });
+
+  it('[owner] is asked for the app code after the password; a password-only session opens no page and no API', async () => {
+    const context = await browser.newContext();
+    const page = await context.newPage();
+    try {
+      const since = Date.now();
+      await page.goto(`${APP_URL}/sign-in?next=/invoices`);
+      await page.getByLabel('E-mail').fill('owner@kestrel-plating.test');
+      await page.getByLabel('Password').fill(DEMO_PASSWORD);
+      await page.getByRole('button', { name: 'Sign in' }).click();
+      await page.waitForURL((u) => u.pathname === '/two-factor');
+      await screenshot(page, 'sign-in-second-factor');
+      // with only the password given, a staff page sends back to the code and the API refuses
+      const cookie = (await context.cookies()).find((c) => c.name === 'ampwright_session');
+      expect(cookie).toBeDefined();
+      const api = await fetch(`${APP_URL}/api/quotes`, { headers: { cookie: `ampwright_session=${cookie!.value}` }, redirect: 'manual' });
+      expect(api.status).toBe(401);
+      const other = await context.newPage();
+      await other.goto(`${APP_URL}/settings/users`);
+      expect(new URL(other.url()).pathname).toBe('/two-factor');
+      expect(await other.content()).not.toContain('estimator@kestrel-plating.test');
+      await other.close();
+      // a wrong code is refused with a field message
+      await page.getByLabel('Code').fill('000000');
+      await page.getByRole('button', { name: 'Continue' }).click();
+      await page.getByText(/does not match|used already/).waitFor();
+      await page.getByLabel('Code').fill(await nextCodeFor('owner@kestrel-plating.test'));
+      await page.getByRole('button', { name: 'Continue' }).click();
+      await page.waitForURL((u) => u.pathname === '/invoices');
+      // a browser the account had not used before: the owner is e-mailed
+      const mail = await waitForMessage('owner@kestrel-plating.test', /New sign-in to your Ampwright account/, since);
+      expect(mail.text).toContain('Browser:');
+    } finally {
+      await context.close();
+    }
+  });
+
+  it('[supervisor] turns on a second factor from the account page and sees the recovery codes once', async () => {
+    const context = await browser.newContext();
+    const page = await context.newPage();
+    const email = 'supervisor@kestrel-plating.test';
+    try {
+      await signInAs(page, email, DEMO_PASSWORD);
+      await page.goto(`${APP_URL}/account`);
+      await page.getByRole('link', { name: 'Set up an authenticator app' }).click();
+      await page.waitForURL((u) => u.pathname === '/two-factor/setup');
+      const key = (await page.getByTestId('totp-secret').innerText()).replace(/\s/g, '');
+      expect(key).toMatch(/^[A-Z2-7]{32}$/);
+      await page.getByLabel(/6-digit code/).fill(new TOTP({ algorithm: 'SHA1', digits: 6, period: 30, secret: Secret.fromBase32(key) }).generate());
+      await page.getByRole('button', { name: 'Turn on' }).click();
+      await page.getByRole('list', { name: 'Recovery codes' }).waitFor();
+      expect(await page.getByRole('list', { name: 'Recovery codes' }).getByRole('listitem').count()).toBe(10);
+      await screenshot(page, 'second-factor-recovery-codes');
+      await page.goto(`${APP_URL}/account`);
+      await page.getByText(/^On\. Signing in asks for a code/).waitFor();
+      await screenshot(page, 'account-second-factor-on');
+    } finally {
+      await context.close();
+      // other files sign in as the supervisor with the password alone
+      const client = new pg.Client({ connectionString: TEST_DATABASE_URL });
+      await client.connect();
+      await client
+        .query('update users set totp_secret = null, totp_enabled_at = null, totp_last_step = null where email = $1', [email])
+        .then(() => client.query('delete from recovery_codes where user_id = (select id from users where email = $1)', [email]))
+        .finally(() => client.end());
     }
   });
 });

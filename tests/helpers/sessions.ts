@@ -24,7 +24,7 @@ export class TestSessions {
     await this.db.connect();
     for (const role of Object.keys(DEMO_USER_IDS) as Role[]) {
       const id = randomBytes(20).toString('hex');
-      await this.db.query(`insert into sessions (id, user_id, expires_at) values ($1, $2, now() + interval '1 hour')`, [id, DEMO_USER_IDS[role]]);
+      await this.db.query(`insert into sessions (id, user_id, expires_at, second_factor) values ($1, $2, now() + interval '1 hour', true)`, [id, DEMO_USER_IDS[role]]);
       this.cookies.set(role, `ampwright_session=${id}`);
     }
   }

@@ -24,9 +24,10 @@ describe('session validation (one query per request)', () => {
     const id = await sessionFor(ESTIMATOR, new Date(Date.now() + 20 * 86_400_000));
     const [session, user] = await sessionAdapter.getSessionAndUser(id);
     const [stockSession, stockUser] = await stock.getSessionAndUser(id);
-    expect(session).toEqual({ id, userId: ESTIMATOR, expiresAt: stockSession!.expiresAt, attributes: {} });
+    expect(session).toEqual({ id, userId: ESTIMATOR, expiresAt: stockSession!.expiresAt, attributes: { second_factor: false, second_factor_failures: 0, two_factor: false } });
     expect(user!.id).toBe(stockUser!.id);
     expect(Object.keys(user!.attributes).sort()).toEqual(['customer_id', 'email', 'is_active', 'name', 'role', 'unit_system']);
+    expect(session!.attributes.two_factor).toBe((stockUser!.attributes as Record<string, unknown>).totp_enabled_at !== null);
     for (const [k, v] of Object.entries(user!.attributes)) expect(v).toEqual((stockUser!.attributes as Record<string, unknown>)[k]);
     expect(stockUser!.attributes).toHaveProperty('password_hash');
   });

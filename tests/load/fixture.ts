@@ -44,7 +44,7 @@ export async function prepareLoadFixture(databaseUrl: string): Promise<LoadFixtu
   const cookies = {} as Record<LoadRole, string>;
   for (const role of ['plater', 'estimator', 'customer'] as const) {
     const id = randomBytes(20).toString('hex');
-    await client.query(`insert into sessions (id, user_id, expires_at) values ($1, $2, now() + interval '2 hours')`, [id, DEMO_USER_IDS[role]]);
+    await client.query(`insert into sessions (id, user_id, expires_at, second_factor) values ($1, $2, now() + interval '2 hours', true)`, [id, DEMO_USER_IDS[role]]);
     sessionIds.push(id);
     cookies[role] = `ampwright_session=${id}`;
   }

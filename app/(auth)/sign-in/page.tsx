@@ -1,6 +1,6 @@
 import type { Metadata } from 'next';
 import { redirect } from 'next/navigation';
-import { getCurrentUser, homePathFor } from '@/lib/auth/current-user';
+import { getCurrentUser, getPendingSignIn, homePathFor } from '@/lib/auth/current-user';
 import { SignInForm } from './sign-in-form';
 
 export const metadata: Metadata = { title: 'Sign in' };
@@ -14,6 +14,7 @@ export default async function SignInPage({ searchParams }: { searchParams: Promi
   const user = await getCurrentUser();
   if (user) redirect(homePathFor(user));
   const { next, notice } = await searchParams;
+  if (await getPendingSignIn()) redirect(`/two-factor${next ? `?next=${encodeURIComponent(next)}` : ''}`);
   return (
     <>
       <h1 className="mb-4 text-lg font-semibold">Sign in</h1>
