@@ -3,6 +3,8 @@ const nextConfig = {
   // The test command builds into its own folder so that it never disturbs a running demo.
   distDir: process.env.NEXT_DIST_DIR || '.next',
   poweredByHeader: false,
+  // The shop's IANA time zone, the same on the server and in the browser (lib/quality/shop-time.ts).
+  env: { SHOP_TIME_ZONE: process.env.SHOP_TIME_ZONE ?? '' },
   reactStrictMode: true,
   async headers() {
     return [

@@ -4,6 +4,8 @@ import pg from 'pg';
 // pg returns int8 and numeric as strings; our int8 values (ids, cents) stay far below 2^53.
 pg.types.setTypeParser(20, (v) => Number(v));
 pg.types.setTypeParser(1700, (v) => Number(v));
+// A date column is a calendar day: UTC midnight of that day, whatever the server's own zone.
+pg.types.setTypeParser(1082, (v) => new Date(`${v}T00:00:00Z`));
 
 export function databaseUrl(): string {
   return process.env.DATABASE_URL ?? 'postgres://app@127.0.0.1:54329/ampwright';

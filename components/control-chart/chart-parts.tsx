@@ -1,6 +1,7 @@
 import type { ReactNode } from 'react';
 import { formatUnitValue } from '../unit-value';
 import type { PointKind, PreparedPoint } from './chart-model';
+import { formatShopTime, shopTimeZone } from '@/lib/quality/shop-time';
 
 // Colours mirror tailwind.config.ts; SVG inside the chart is drawn with literal values.
 export const chartColors = {
@@ -48,12 +49,13 @@ export function PointMark({ kind, x, y, size = 1 }: { kind: PointKind; x: number
   return <circle cx={x} cy={y} r={3.2 * size} fill={chartColors.action} stroke={chartColors.surface} strokeWidth={1} />;
 }
 
+/** A reading's time in the shop's zone (or `timeZone`): "8 Mar" on the axis, "8 Mar 2026, 14:30 EDT" in full, as elsewhere. */
 export function formatTime(t: string, style: 'tick' | 'full', timeZone?: string): string {
   const date = new Date(t);
   if (Number.isNaN(date.getTime())) return t;
-  const options: Intl.DateTimeFormatOptions =
-    style === 'tick' ? { month: 'short', day: 'numeric', timeZone } : { dateStyle: 'medium', timeStyle: 'short', timeZone };
-  return new Intl.DateTimeFormat('en-US', options).format(date);
+  const tz = timeZone ?? shopTimeZone();
+  if (style === 'full') return formatShopTime(date, tz);
+  return new Intl.DateTimeFormat('en-GB', { day: 'numeric', month: 'short', timeZone: tz }).format(date);
 }
 
 type TooltipBodyProps = {

@@ -68,7 +68,8 @@ export function ControlChart({ points, cl, ucl, lcl, lsl, usl, unit, label, digi
 
   const first = data[0];
   const last = data[data.length - 1];
-  const ruleCount = data.filter((p) => p.kind === 'rule').length;
+  // Every reading a rule fired on, whether or not it is also outside specification (marked as such).
+  const ruleCount = data.filter((p) => p.rules.length > 0).length;
   const specCount = data.filter((p) => p.kind === 'spec').length;
   const summary =
     `${data.length} ${data.length === 1 ? 'reading' : 'readings'}` +
@@ -96,7 +97,7 @@ export function ControlChart({ points, cl, ucl, lcl, lsl, usl, unit, label, digi
         <span className="text-sm font-semibold text-ink">
           {label} <span className="font-normal text-ink-muted">({unit})</span>
         </span>
-        {/* Dates follow the reader's zone unless timeZone is set, so server and browser text may differ. */}
+        {/* Dates are in the shop's zone (or timeZone), the same text on server and browser. */}
         <span className="sr-only" suppressHydrationWarning>
           {summary}
         </span>

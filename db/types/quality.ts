@@ -8,7 +8,7 @@ import type { Json, Numeric, NumericNullable, Timestamp, TimestampNullable } fro
 /** ASTM method numbers for coating thickness. */
 export type ThicknessMethod = 'B568' | 'B499' | 'B244' | 'B504' | 'B487' | 'B567';
 export type ReadingStatusColumn = 'pass' | 'below_minimum' | 'above_maximum';
-export type NonconformanceSource = 'thickness' | 'bake' | 'other';
+export type NonconformanceSource = 'thickness' | 'bake' | 'bath' | 'other';
 export type Disposition = 'rework' | 'strip_and_replate' | 'use_as_is' | 'scrap';
 
 export type SamplingPlansTable = {

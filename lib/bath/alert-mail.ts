@@ -5,6 +5,7 @@ import type { AlertEmailKind, Database, Role } from '@/db/types';
 import { appUrl, sendEmail } from '@/lib/email/mailer';
 import { inTransaction } from '@/lib/records/transaction';
 import { ALERT_KIND_LABEL } from './alerts';
+import { formatWhen } from './display';
 
 // E-mail about bath alerts: supervisors when one is raised, owners when it escalates. Each
 // (alert, kind, recipient) is claimed in bath_alert_emails in the transaction that sends it: a job
@@ -32,7 +33,7 @@ export async function notifyAlert(alertId: string, kind: AlertEmailKind, executo
   const subject = `${kind === 'escalated' ? 'Escalated, not yet acknowledged' : ALERT_KIND_LABEL[alert.kind]} — ${what}`;
   const text = [
     kind === 'escalated'
-      ? `This bath alert has not been acknowledged since ${alert.raised_at.toISOString()} and has been escalated to you.`
+      ? `This bath alert has not been acknowledged since ${formatWhen(alert.raised_at)} and has been escalated to you.`
       : 'A bath alert was raised.',
     '',
     `Tank: ${alert.code} ${alert.tank_name}`,

@@ -2,6 +2,7 @@
 // safe in the browser. Values are stored in the analysis method's unit (g/L, °C, mL/L, pH …); only
 // the quantities the units module knows are converted (g/L ↔ oz/gal, °C ↔ °F, kg ↔ lb, L ↔ gal).
 import { convert, type UnitId, type UnitSystem, UNITS } from '../plating/units';
+import { formatShopTime, shopTimeZone } from '../quality/shop-time';
 import type { LimitName, Limits, Verdict, VerdictStatus } from './verdict';
 
 const SYMBOL_TO_ID: Record<string, UnitId> = {
@@ -74,10 +75,7 @@ export function verdictSentence(verdict: Pick<Verdict, 'status' | 'limit'>, limi
   return `${verdict.limit.startsWith('lower') ? 'Below' : 'Above'} the ${words}${shown}.`;
 }
 
-const WHEN = new Intl.DateTimeFormat('en-GB', { dateStyle: 'short', timeStyle: 'short', timeZone: 'UTC' });
-
-/** A time as "01/12/2026, 07:45 UTC": the same text on the server and in the browser. */
+/** A time in the shop's zone, "1 Dec 2026, 07:45 EST", as every screen, PDF and e-mail writes it (server and browser agree). */
 export function formatWhen(at: Date | string): string {
-  const d = typeof at === 'string' ? new Date(at) : at;
-  return Number.isNaN(d.getTime()) ? '—' : `${WHEN.format(d)} UTC`;
+  return formatShopTime(at, shopTimeZone());
 }

@@ -56,7 +56,7 @@ export function evaluateReading(analyte: EvaluateAnalyte, volumeL: number, input
 /** Judges a value already in the analyte's unit (an outside lab's result) and says what to do. */
 export function evaluateValue(analyte: EvaluateAnalyte, volumeL: number, value: number): Evaluation {
   try {
-    const verdict = judgeValue(value, analyte.limits);
+    const verdict = judgeValue(value, analyte.limits, { unit: analyte.unit });
     const recommendation = recommendCorrection({
       analyte: { key: analyte.key, name: analyte.name, unit: analyte.unit, target: analyte.limits.target, supply: analyte.supply },
       volumeL,

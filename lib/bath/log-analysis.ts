@@ -121,7 +121,7 @@ export async function logAnalysis(actor: BathActor, input: LogAnalysisInput, exe
           analyteId: analyte.id,
           kind: 'out_of_limits' as const,
           dedupeKey: `out_of_limits:${analyte.id}`,
-          message: `${where}: ${value.toPrecision(4)} ${analyte.unit}. ${verdict.message}`,
+          message: `${where}: ${verdict.message}`,
           detail: { value, unit: analyte.unit, limit: verdict.limit, outOfSpec: verdict.outOfSpec },
         }]
       : []),

@@ -5,6 +5,7 @@ import type { Database } from '@/db/types';
 import { notifyAlert } from './alert-mail';
 import { raiseAlert } from './alerts';
 import { getBathSettings } from './settings';
+import { formatWhen } from './display';
 
 // The checks the background worker runs on a schedule. Each is idempotent: running it twice raises
 // nothing new (alerts dedupe on their key while open) and sends no e-mail twice (alert-mail claims
@@ -142,7 +143,7 @@ export async function checkMissingAdditions(now: Date = new Date(), executor: Db
       analysisId: r.id,
       kind: 'addition_missing' as const,
       dedupeKey: `addition_missing:${r.analyte_id}`,
-      message: `${r.code} ${r.tank_name}, ${r.name}: the correction recommended on ${r.taken_at.toISOString().slice(0, 16).replace('T', ' ')} UTC has not been recorded.`,
+      message: `${r.code} ${r.tank_name}, ${r.name}: the correction recommended on ${formatWhen(r.taken_at)} has not been recorded.`,
       detail: { recommendation: r.recommendation },
     })),
   );

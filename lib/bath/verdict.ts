@@ -73,7 +73,13 @@ function margin(limit: number, other: number | undefined, target: number | undef
   return Math.abs(limit) * fraction;
 }
 
-export function judgeValue(value: number, limits: Limits, options: { nearFraction?: number } = {}): Verdict {
+/** A figure as the verdict says it: four significant figures (as the screens round an analyte), with its unit. */
+function said(x: number, unit: string | undefined): string {
+  const n = x === 0 || !Number.isFinite(x) ? x : Number(x.toPrecision(4));
+  return unit ? `${n} ${unit}` : String(n);
+}
+
+export function judgeValue(value: number, limits: Limits, options: { nearFraction?: number; unit?: string } = {}): Verdict {
   const v = requireNumber(value, 'value', 'The value');
   const fraction = requireNumber(options.nearFraction ?? NEAR_LIMIT_FRACTION, 'nearFraction', 'Near-limit fraction', {
     min: 0,
@@ -87,7 +93,7 @@ export function judgeValue(value: number, limits: Limits, options: { nearFractio
       limit,
       outOfSpec,
       severity: outOfSpec ? 3 : 2,
-      message: `${v} is ${side} the ${LABEL[limit]} (${bound}).`,
+      message: `${said(v, options.unit)} is ${side} the ${LABEL[limit]} (${said(bound, options.unit)}).`,
     };
   };
 
@@ -109,7 +115,7 @@ export function judgeValue(value: number, limits: Limits, options: { nearFractio
     const useLower = nearLower && (!nearUpper || distLower <= distUpper);
     const limit = useLower ? lowerName : upperName;
     const bound = (useLower ? lower : upper) as number;
-    return { status: 'near_limit', limit, outOfSpec: false, severity: 1, message: `${v} is close to the ${LABEL[limit]} (${bound}).` };
+    return { status: 'near_limit', limit, outOfSpec: false, severity: 1, message: `${said(v, options.unit)} is close to the ${LABEL[limit]} (${said(bound, options.unit)}).` };
   }
-  return { status: 'in_range', limit: null, outOfSpec: false, severity: 0, message: `${v} is within limits.` };
+  return { status: 'in_range', limit: null, outOfSpec: false, severity: 0, message: `${said(v, options.unit)} is within limits.` };
 }

@@ -106,9 +106,12 @@ export function processFields(p: JobProcess, system: UnitSystem): ProcessFields 
   };
 }
 
+// One default part, 50 × 30 × 10 mm, shown in the reader's length unit: the same part (and so the
+// same amp-hours) whichever units the user picks.
+const DEFAULT_PART_MM = { lengthMm: 50, widthMm: 30, heightMm: 10 };
 const DEFAULT_DIMS: Record<UnitSystem, Record<string, string>> = {
-  metric: { lengthMm: '50', widthMm: '30', heightMm: '10' },
-  us: { lengthMm: '2', widthMm: '1.25', heightMm: '0.375' },
+  metric: Object.fromEntries(Object.entries(DEFAULT_PART_MM).map(([k, mm]) => [k, text(mm)])),
+  us: Object.fromEntries(Object.entries(DEFAULT_PART_MM).map(([k, mm]) => [k, converted(lengthFromMm(mm, LENGTH_UNIT.us))])),
 };
 
 export function defaultForm(system: UnitSystem, library: readonly LibraryProcess[]): WorkbenchForm {

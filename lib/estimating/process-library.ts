@@ -87,12 +87,16 @@ export function libraryProcessFrom(finish: FinishFacts, tanks: readonly TankFact
   };
 }
 
+// Chromium is plated on insoluble (lead-alloy) anodes, its metal made up from chromic acid
+// (reference, "Anode metal consumed": insoluble anodes for Cr).
+const INSOLUBLE_ANODE_METALS: ReadonlySet<string> = new Set(['Cr']);
+
 function freeShopDefaults(element: string, loading: Loading) {
   return {
     rectifierEfficiency: DEFAULT_RECTIFIER_EFFICIENCY,
     dragOutLPerM2: DEFAULT_DRAG_OUT_L_PER_M2[loading],
     bathMetalGPerL: 0,
-    anodes: 'soluble' as const,
+    anodes: INSOLUBLE_ANODE_METALS.has(element) ? ('insoluble' as const) : ('soluble' as const),
     anodeLossPercent: 0,
     replenishmentSalt: REPLENISHMENT_SALTS[element],
   };

@@ -2,6 +2,8 @@
 // calculation. The page calls it on every keystroke (in the browser) and the benchmark times it.
 // Pure and synchronous.
 import { PLATING_METALS, PlatingInputError, type UnitSystem } from '@/lib/plating';
+import type { CautionKind } from '@/components/ui/caution';
+import { platingCautions } from '@/lib/finishes/hazards';
 import { bakeFor, safetyNotes, type SafetyNote } from './safety';
 import type { CalculationInput } from './calculation-schema';
 import { computeCalculation, fieldErrorsOf, measureGeometry, type CalculationResult, type GeometryFigures } from './calculation';
@@ -38,7 +40,8 @@ export type WorkbenchView = {
   geometry: GeometryFigures | null; // shown even while the process fields have errors
   // Cautions follow the metal and the part alone, so they stay up while other fields are wrong.
   safety: SafetyNote[];
-  metalCaution: string | null;
+  /** The bath's own cautions (current, hydrogen, nickel salts, acid, caustic) that `safety` does not already give. */
+  bathCautions: CautionKind[];
   fieldErrors: FieldErrors;
 };
 
@@ -47,9 +50,9 @@ function optionalNumber(text: string): number | null {
   return text.trim() === '' || !Number.isFinite(n) ? null : n;
 }
 
-function cautionsOf(form: WorkbenchForm): Pick<WorkbenchView, 'safety' | 'metalCaution'> {
+function cautionsOf(form: WorkbenchForm, finishWords: string): Pick<WorkbenchView, 'safety' | 'bathCautions'> {
   const metal = PLATING_METALS.find((m) => m.key === form.metalKey);
-  if (!metal) return { safety: [], metalCaution: null };
+  if (!metal) return { safety: [], bathCautions: [] };
   let bake = null;
   try {
     bake = bakeFor(form.substrate, optionalNumber(form.hardnessHrc), optionalNumber(form.tensileMpa));
@@ -57,8 +60,8 @@ function cautionsOf(form: WorkbenchForm): Pick<WorkbenchView, 'safety' | 'metalC
     if (!(e instanceof PlatingInputError)) throw e; // the hardness field shows the message
   }
   const safety = safetyNotes(metal.element, metal.charge, bake);
-  const said = safety.some((n) => n.detail === metal.caution);
-  return { safety, metalCaution: said ? null : metal.caution };
+  const said = new Set<string>(safety.map((n) => n.kind));
+  return { safety, bathCautions: platingCautions(metal.element, metal.charge, finishWords).filter((k) => !said.has(k)) };
 }
 
 function engineErrors(e: unknown, form: WorkbenchForm): FieldErrors {
@@ -68,9 +71,10 @@ function engineErrors(e: unknown, form: WorkbenchForm): FieldErrors {
   return fieldErrorsOf(e, { ...FORM_FIELDS, areaPerPartDm2: geometryKey, areaDm2: geometryKey, volumeCm3: geometryKey }, '_form');
 }
 
-export function recomputeWorkbench(form: WorkbenchForm, system: UnitSystem): WorkbenchView {
+/** `finishWords`: the chosen finish's name and specification ("Alkaline zinc …"), which tell the bath's chemistry. */
+export function recomputeWorkbench(form: WorkbenchForm, system: UnitSystem, finishWords = ''): WorkbenchView {
   const reading = readForm(form, system);
-  const cautions = cautionsOf(form);
+  const cautions = cautionsOf(form, finishWords);
   let geometry: GeometryFigures | null = null;
   let fieldErrors = reading.fieldErrors;
   if (reading.geometry) {

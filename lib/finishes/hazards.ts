@@ -13,6 +13,30 @@ const HEXAVALENT = /hexavalent|chromic acid|dichromate|\bcr\s*\(?vi\)?\b|yellow 
 // "free of hexavalent chromium", "trivalent", "non-hexavalent" describe the safer process.
 const NOT_HEXAVALENT = /\bfree\b|\bnon-?hex|trivalent|without|cr\s*\(?iii\)?/i;
 
+// The bath's own chemistry, where the finish's name, specification or route says it.
+const CAUSTIC_BATH = /alkaline (zinc|tin|copper)|stannate|caustic|sodium hydroxide|potassium hydroxide/i;
+const ACID_BATH = /acid (copper|zinc|tin|nickel|gold)|copper sulfate|sulfate copper|chloride zinc|zinc chloride|sulfuric|hydrochloric|pickl|acid dip/i;
+
+/**
+ * The cautions an electroplating bath of this metal carries (reference §12): current and the
+ * hydrogen it makes at the work for every bath; nickel salts; acid copper sulfate, chromic acid and
+ * acid tin; cyanide copper's free caustic; alkaline zinc or stannate tin where the words say so (a
+ * zinc bath may be acid or alkaline, so the metal alone does not tell).
+ */
+export function platingCautions(element: string, ionCharge: number, words = ''): CautionKind[] {
+  const kinds = new Set<CautionKind>(['electrical', 'hydrogen']);
+  const key = `${element}${ionCharge}+`;
+  if (element === 'Ni') kinds.add('nickel');
+  if (key === 'Cu2+' || key === 'Cr6+') kinds.add('acid');
+  if (key === 'Cr6+') kinds.add('heat');
+  if (key === 'Cu1+') kinds.add('caustic');
+  if (key === 'Sn4+') kinds.add('caustic');
+  if (key === 'Sn2+' && !CAUSTIC_BATH.test(words)) kinds.add('acid');
+  if (CAUSTIC_BATH.test(words)) kinds.add('caustic');
+  if (ACID_BATH.test(words)) kinds.add('acid');
+  return [...kinds];
+}
+
 export function finishHazards(finish: {
   family?: ProcessFamilyId;
   familyParams?: unknown;
@@ -20,16 +44,21 @@ export function finishHazards(finish: {
   ionCharge: number;
   route: readonly RouteStep[];
   bakeRequired: boolean;
+  /** The finish's name and specification: "Alkaline zinc …" tells the bath's chemistry. */
+  words?: string;
 }): CautionKind[] {
   const kinds = new Set<CautionKind>();
   const family = getFamily(finish.family);
   const params = family.paramsSchema.safeParse(finish.familyParams ?? family.defaultParams);
   for (const k of family.cautions(params.success ? params.data : family.defaultParams)) kinds.add(k);
+  if (family.id === 'electroplating') {
+    const words = `${finish.words ?? ''} ${finish.route.map((s) => `${s.step} ${s.note ?? ''}`).join(' ')}`;
+    for (const k of platingCautions(finish.element, finish.ionCharge, words)) kinds.add(k);
+  }
   const metal = findMetal(finish.element, finish.ionCharge);
   if (metal?.caution && CYANIDE.test(metal.caution)) kinds.add('cyanide');
   if (metal?.element === 'Cr' && metal.charge === 6) kinds.add('hexavalent-chromium');
-  for (const s of finish.route) {
-    const text = `${s.step} ${s.note ?? ''}`;
+  for (const text of [finish.words ?? '', ...finish.route.map((s) => `${s.step} ${s.note ?? ''}`)]) {
     if (CYANIDE.test(text)) kinds.add('cyanide');
     if (HEXAVALENT.test(text) && !NOT_HEXAVALENT.test(text)) kinds.add('hexavalent-chromium');
   }

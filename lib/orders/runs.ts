@@ -1,5 +1,5 @@
 import 'server-only';
-import { type Kysely } from 'kysely';
+import { type Kysely, type Transaction, sql } from 'kysely';
 import { z } from 'zod';
 import { db as defaultDb } from '@/db';
 import type { Database } from '@/db/types';
@@ -13,6 +13,25 @@ import { runAmpHours, runMinutes, type RunCharge } from './run-math';
 import { changeWorkOrderState } from './states';
 
 type Db = Kysely<Database>;
+
+/**
+ * The tank's analytes whose latest current analysis before `at` was outside a specification
+ * limit (severity 3), as "Zinc metal 41.09 g/L": a run made then needs a supervisor's disposition.
+ */
+export async function bathOutsideSpecification(trx: Transaction<Database> | Db, tankId: string, at: Date): Promise<string[]> {
+  const r = await sql<{ name: string; value: number; unit: string }>`
+    select ta.name, a.value, a.unit
+    from tank_analytes ta
+    join lateral (
+      select x.value, x.unit, x.severity from analyses x
+      where x.analyte_id = ta.id and x.taken_at <= ${at}
+        and not exists (select 1 from analyses c where c.supersedes_id = x.id)
+      order by x.taken_at desc limit 1
+    ) a on true
+    where ta.tank_id = ${tankId} and ta.is_active and a.severity >= 3
+    order by ta.sort_order, ta.name`.execute(trx);
+  return r.rows.map((row) => `${row.name} ${Number(Number(row.value).toPrecision(4))} ${row.unit}`);
+}
 
 const decimal = (label: string) =>
   z.preprocess((v) => (v === '' || v === undefined ? undefined : typeof v === 'string' ? v.replace(',', '.') : v), z.coerce.number({ error: `Enter ${label}.` }).finite(`Enter ${label}.`).optional());
@@ -52,7 +71,8 @@ export function chargeOf(input: RunInput): RunCharge {
 
 export const BELOW_MINIMUM_MESSAGE = 'The predicted thickness is below the specification minimum. Check the current and time, or tick "Save anyway" to record the run as it was.';
 
-export type LoggedRun = { id: string; duplicate: boolean; prediction: FamilyRunPrediction | null; nonconformanceId: string | null };
+/** `bathOutside`: the analytes outside specification when the run was made (a nonconformance is then open). */
+export type LoggedRun = { id: string; duplicate: boolean; prediction: FamilyRunPrediction | null; nonconformanceId: string | null; bathOutside: string[] };
 
 /** The bath conditions the run's family records, in storage units. */
 function conditionsOf(input: RunInput, wanted: readonly ('temperatureC' | 'concentration')[]): { temperatureC?: number; concentration?: number } {
@@ -74,7 +94,7 @@ export async function logPlatingRun(actor: Actor, input: RunInput, conn: Db = de
   const existing = await conn.selectFrom('plating_runs').select(['id', 'work_order_id']).where('idempotency_key', '=', input.idempotencyKey).executeTakeFirst();
   if (existing) {
     if (existing.work_order_id !== input.workOrderId) throw new AppError('CONFLICT', 'This form was already used for another order; reload the page.');
-    return { id: existing.id, duplicate: true, prediction: null, nonconformanceId: null };
+    return { id: existing.id, duplicate: true, prediction: null, nonconformanceId: null, bathOutside: [] };
   }
   return conn.transaction().execute(async (trx) => {
     const wo = await trx
@@ -159,7 +179,7 @@ export async function logPlatingRun(actor: Actor, input: RunInput, conn: Db = de
     if (!inserted) {
       // A concurrent retry won the race: answer with its run.
       const first = await trx.selectFrom('plating_runs').select('id').where('idempotency_key', '=', input.idempotencyKey).executeTakeFirstOrThrow();
-      return { id: first.id, duplicate: true, prediction, nonconformanceId: null };
+      return { id: first.id, duplicate: true, prediction, nonconformanceId: null, bathOutside: [] };
     }
     let nonconformanceId: string | null = null;
     if (prediction.outsideWindow.length) {
@@ -170,9 +190,23 @@ export async function logPlatingRun(actor: Actor, input: RunInput, conn: Db = de
         .executeTakeFirstOrThrow();
       nonconformanceId = nc.id;
     }
+    const outside = await bathOutsideSpecification(trx, tank.id, now);
+    if (outside.length) {
+      const nc = await trx
+        .insertInto('nonconformances')
+        .values({
+          work_order_id: wo.id,
+          source: 'bath',
+          description: `Run on ${tank.code} while its bath was outside specification limits: ${outside.join(', ')}.`.slice(0, 2000),
+          opened_by: actor.id,
+        })
+        .returning('id')
+        .executeTakeFirstOrThrow();
+      nonconformanceId ??= nc.id;
+    }
     if (wo.state === 'received') {
       await changeWorkOrderState(trx, { workOrderId: wo.id, to: 'in_process', actorId: actor.id, note: `First run on ${tank.code}` });
     }
-    return { id: inserted.id, duplicate: false, prediction, nonconformanceId };
+    return { id: inserted.id, duplicate: false, prediction, nonconformanceId, bathOutside: outside };
   });
 }

@@ -3,6 +3,7 @@ import { Document, Image, Page, Text, View, renderToBuffer } from '@react-pdf/re
 import QRCode from 'qrcode';
 import { cautionTexts, SAFETY_DEFERRAL } from '@/components/ui/caution';
 import { appUrl } from '@/lib/email/mailer';
+import { finishHazards } from '@/lib/finishes/hazards';
 import { formatStoredQuantity, type UnitSystem } from '@/lib/plating';
 import { formatDay } from '@/lib/quotes/format';
 import { Labelled, PageFooter, PDF_COLORS, pdf, registerPdfFonts, ShopBlock, type ShopHeader } from '@/lib/quotes/pdf-theme';
@@ -37,6 +38,16 @@ export function TravelerDocument({ wo, shop, qrPng, units }: { wo: WorkOrderDeta
     { title: 'Pack and ship', note: wo.shipping_address },
   ];
   const bake = cautionTexts['high-strength-steel-bake'];
+  // The finish's own cautions, as its screens show them; the bake has its own box above.
+  const cautions = finishHazards({
+    family: wo.family,
+    familyParams: wo.family_params,
+    element: wo.element,
+    ionCharge: wo.ion_charge,
+    route: wo.process_route,
+    bakeRequired: false,
+    words: `${wo.finish_name} ${wo.spec_text}`,
+  }).map((k) => cautionTexts[k]);
   return (
     <Document title={`Traveler ${wo.number}`} creator="Ampwright">
       <Page size="LETTER" style={pdf.page}>
@@ -91,9 +102,12 @@ export function TravelerDocument({ wo, shop, qrPng, units }: { wo: WorkOrderDeta
           </View>
         ) : null}
         <View style={pdf.note} wrap={false}>
-          <Text style={{ fontWeight: 600 }}>{cautionTexts.electrical.title} and {cautionTexts.hydrogen.title.toLowerCase()}</Text>
-          <Text>{cautionTexts.electrical.text}</Text>
-          <Text>{cautionTexts.hydrogen.text}</Text>
+          <Text style={{ fontWeight: 600 }}>Cautions: {cautions.map((c) => c.title).join(' · ')}</Text>
+          {cautions.map((c) => (
+            <Text key={c.title}>
+              {c.title}: {c.text}
+            </Text>
+          ))}
           <Text style={pdf.small}>{SAFETY_DEFERRAL}</Text>
         </View>
         <PageFooter left={`${wo.number} · ${appUrl(`/work-orders/${wo.id}`)}`} />

@@ -22,7 +22,8 @@ export type CheckKey =
   | 'phosphorus_content'
   | 'passivation_lot'
   | 'passivation_test'
-  | 'salt_spray';
+  | 'salt_spray'
+  | 'inspected';
 export type LotCheck = { key: CheckKey; ok: boolean; message: string };
 
 export const MESSAGES = {
@@ -223,8 +224,25 @@ export function inspectionChecks(lot: LotRecord): LotCheck[] {
   return checks;
 }
 
-/** Every check, in the order a certificate asks them. */
+/** Every record check, in the order a certificate asks them. */
 export function lotChecks(lot: LotRecord): LotCheck[] {
   const inspection = inspectionChecks(lot);
   return [runsCheck(lot), ...inspection.slice(0, -1), bakeCheck(lot), inspection.at(-1)!];
+}
+
+const CERTIFIABLE_STATES = new Set(['inspected', 'shipped', 'invoiced']);
+const STATE_WORDS: Record<string, string> = {
+  accepted: 'awaiting parts', received: 'received', in_process: 'in process', plated: 'plated', baked: 'baked',
+};
+
+/** A certificate speaks for an inspected lot: the order must have passed its inspection step. */
+export function inspectedCheck(lot: LotRecord): LotCheck {
+  return CERTIFIABLE_STATES.has(lot.order.state)
+    ? { key: 'inspected', ok: true, message: 'The lot has passed inspection.' }
+    : { key: 'inspected', ok: false, message: `The order is ${STATE_WORDS[lot.order.state] ?? lot.order.state}, not yet inspected: a certificate is issued once the lot passes inspection.` };
+}
+
+/** What a certificate asks: every record, then the inspection step itself. */
+export function certificateChecks(lot: LotRecord): LotCheck[] {
+  return [...lotChecks(lot), inspectedCheck(lot)];
 }

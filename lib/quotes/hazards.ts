@@ -1,9 +1,11 @@
-// Which safety cautions a quote's lines call for. Pure.
+// Which safety cautions a quote's lines call for: each line's finish, as every other screen judges
+// it (lib/finishes/hazards), and the relief bake where the line's cost includes one. Pure.
 import type { CautionKind } from '@/components/ui/caution';
 import type { ProcessFamilyId, ProcessStep } from '@/db/types';
-import { getFamily } from '@/lib/families';
+import { finishHazards } from '@/lib/finishes/hazards';
 
 type HazardLine = {
+  finishName?: string;
   processRoute: ProcessStep[];
   specText: string;
   calculation: { input: { finish: { element: string; ionCharge: number; family?: ProcessFamilyId; familyParams?: Record<string, unknown> } } };
@@ -13,14 +15,17 @@ type HazardLine = {
 export function quoteHazards(lines: readonly HazardLine[]): CautionKind[] {
   const kinds = new Set<CautionKind>();
   for (const l of lines) {
-    const text = `${l.specText} ${l.processRoute.map((s) => `${s.step} ${s.note ?? ''}`).join(' ')}`;
-    if (/cyanide/i.test(text)) kinds.add('cyanide');
     const f = l.calculation.input.finish;
-    const family = getFamily(f.family);
-    const params = family.paramsSchema.safeParse(f.familyParams ?? family.defaultParams);
-    for (const k of family.cautions(params.success ? params.data : family.defaultParams)) kinds.add(k);
-    if (f.element === 'Cr' && f.ionCharge === 6) kinds.add('hexavalent-chromium');
-    if (l.cost.bake.applies) kinds.add('high-strength-steel-bake');
+    const found = finishHazards({
+      family: f.family,
+      familyParams: f.familyParams,
+      element: f.element,
+      ionCharge: f.ionCharge,
+      route: l.processRoute,
+      bakeRequired: l.cost.bake.applies,
+      words: `${l.finishName ?? ''} ${l.specText}`,
+    });
+    for (const k of found) kinds.add(k);
   }
   return [...kinds];
 }

@@ -55,7 +55,8 @@ export function bathMetalGPerL(templateId: string, element: string): number {
   if (metal) return metal.target;
   const salt = SALT_ANALYTE[element];
   const saltRow = salt ? template.analytes.find((a) => a.key === salt.key && a.unit === 'g/L') : undefined;
-  return salt && saltRow ? saltRow.target * metalFraction(salt.formula, element) : 0;
+  // To 0.1 g/L, as a bath is made up and analysed: 250 g/L CrO3 is 130 g/L chromium, not 129.9986.
+  return salt && saltRow ? Math.round(saltRow.target * metalFraction(salt.formula, element) * 10) / 10 : 0;
 }
 
 /** Active tanks that can run the finish (its family decides), those on the finish's own line first. */

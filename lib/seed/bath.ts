@@ -80,7 +80,7 @@ export async function seedBath(db: Db): Promise<void> {
     if (lastZinc.verdict === 'out_of_range') {
       await raiseAlert(db, {
         tankId: zincTank.id, analyteId: zinc.id, analysisId: analysis.id, kind: 'out_of_limits', dedupeKey: `out_of_limits:${zinc.id}`,
-        message: `${where}: ${analysis.value.toPrecision(4)} ${zinc.unit} is above the upper control limit (${zinc.upper_control}).`,
+        message: `${where}: ${Number(Number(analysis.value).toPrecision(4))} ${zinc.unit} is above the upper control limit (${zinc.upper_control} ${zinc.unit}).`,
       });
     }
     await raiseAlert(db, {

@@ -19,7 +19,7 @@ import { actionRequest } from '../helpers/actions';
 import { APP_URL } from '../helpers/browser';
 import { discoverActions, discoverApiRoutes, discoverPages, type Guard } from '../helpers/routes';
 import { makeOrder } from '../integration/billing/fixtures';
-import { actorFor, createLot, passingReadings, PLATER, SUPERVISOR } from '../integration/quality/fixtures';
+import { actorFor, createLot, inspect, passingReadings, PLATER, SUPERVISOR } from '../integration/quality/fixtures';
 import { finishId, staff, suffix } from '../integration/quotes/fixtures';
 
 // The two demo companies, each with a contact who signs in, and what its fresh quote is for.
@@ -289,6 +289,7 @@ async function prepare(code: Code): Promise<Company> {
   if (!cert) {
     const lot = await createLot(db, { customerCode: code, quantity: 20 });
     await recordReadings(await actorFor(db, PLATER), { workOrderId: lot.id, entry: 'manual', readings: passingReadings(5) });
+    await inspect(db, lot.id);
     const issued = await issueCertificate(await actorFor(db, SUPERVISOR), lot.id);
     cert = { id: issued.id, number: issued.number, pdf_file_id: issued.pdfFileId };
   }

@@ -3,11 +3,11 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { db } from '@/db';
 import { recordReadings } from '@/lib/quality/thickness';
 import { DEMO_PASSWORD } from '@/lib/seed';
-import { actorFor, createLot, passingReadings, PLATER } from '../integration/quality/fixtures';
+import { actorFor, createLot, inspect, passingReadings, PLATER } from '../integration/quality/fixtures';
 import { APP_URL, launchBrowser, screenshot, signInAs } from '../helpers/browser';
 
 let browser: Browser;
-// A lot of 20 for Northgate (Z1.4 code C → 5 parts) with its five readings, ready to certify;
+// A lot of 20 for Northgate (Z1.4 code C → 5 parts) with its five readings, inspected and ready to certify;
 // a bake lot plated three hours ago; a lot with no readings yet.
 let ready: { id: string; number: string };
 let bakeLot: { id: string; number: string };
@@ -18,6 +18,7 @@ beforeAll(async () => {
   browser = await launchBrowser();
   ready = await createLot(db, { quantity: 20 });
   await recordReadings(await actorFor(db, PLATER), { workOrderId: ready.id, entry: 'manual', readings: passingReadings(5) });
+  await inspect(db, ready.id);
   bakeLot = await createLot(db, { bake: true, quantity: 60, platingEnd: new Date(Date.now() - 3 * 3_600_000) });
   bare = await createLot(db, { quantity: 20 });
 });

@@ -18,7 +18,7 @@ export default async function PortalLayout({ children }: { children: ReactNode }
         label="Customer area"
         items={navFor(user.role, CUSTOMER_NAV, { demoMode: false }).map(({ href, label }) => ({ href, label }))}
         brand={<Brand href="/portal" subtitle="Customer area" />}
-        footer={<UserMenu user={user} accountHref="/portal/account" />}
+        footer={<UserMenu user={user} accountHref="/portal/account" inline />}
         className="border-b border-surface-line bg-surface"
       />
       <main className="mx-auto max-w-5xl px-4 py-6">{children}</main>

@@ -27,7 +27,7 @@ export function FinishForm({ defaults, lines, readOnly, units }: Props) {
   const [route, setRoute] = useState(defaults.route ?? '');
   const [bake, setBake] = useState(defaults.bakeRequired === 'on');
   const m = family.metal ?? PLATING_METALS.find((x) => x.key === metal);
-  const hazards = m ? finishHazards({ element: m.element, ionCharge: m.charge, route: routeFromText(route), bakeRequired: bake }) : [];
+  const hazards = m ? finishHazards({ family: familyId, element: m.element, ionCharge: m.charge, route: routeFromText(route), bakeRequired: bake, words: `${v('name')} ${v('specText')}` }) : [];
   const fieldUnit = (convert: 'thicknessPerHour' | 'temperature' | 'dollars' | undefined, unit: string | undefined) =>
     convert === 'dollars' ? '$' : convert === 'thicknessPerHour' ? `${UNITS[displayUnit('thickness', units)].symbol}/h` : convert === 'temperature' ? UNITS[displayUnit('temperature', units)].symbol : unit;
   const check = (name: string, label: string, checked?: boolean, onChange?: (on: boolean) => void) => (

@@ -61,7 +61,7 @@ export default async function FinishesPage() {
             {
               header: 'Cautions',
               cell: (f) =>
-                finishHazards({ family: f.family, familyParams: f.family_params, element: f.element, ionCharge: f.ion_charge, route: f.process_route, bakeRequired: f.bake_required }).map((k) => (
+                finishHazards({ family: f.family, familyParams: f.family_params, element: f.element, ionCharge: f.ion_charge, route: f.process_route, bakeRequired: f.bake_required, words: `${f.name} ${f.spec_text}` }).map((k) => (
                   <Badge key={k} tone="copper" className="mr-1">
                     {cautionTexts[k].title}
                   </Badge>

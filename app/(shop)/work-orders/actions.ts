@@ -26,6 +26,9 @@ export const logRunAction = formAction('runs.log', runSchema, async (input, user
   revalidatePath(at(input.workOrderId));
   if (run.duplicate) return { ok: true, message: 'This run was already saved; nothing was added twice.' };
   const p = run.prediction;
+  if (run.bathOutside.length) {
+    return { ok: true, message: `Run saved. The bath was outside its specification limits (${run.bathOutside.join(', ')}), so a nonconformance is open: a supervisor's disposition comes before inspection.` };
+  }
   if (p?.outsideWindow.length) {
     return { ok: true, message: `Run saved as it was. It was outside the process window (${p.outsideWindow.join(' ')}), so a nonconformance is open for quality.` };
   }

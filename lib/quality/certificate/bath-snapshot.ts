@@ -15,16 +15,17 @@ type Row = {
   value: number | null;
   unit: string | null;
   verdict: BathAnalysis['status'] | null;
+  severity: number | null;
   rules: string[] | null;
   taken_at: Date | null;
 };
 
 async function analysesAsOf(db: Db, tankId: string, asOf: Date): Promise<Row[]> {
   const r = await sql<Row>`
-    select ta.name as analyte_name, ta.frequency_hours, a.value, a.unit, a.verdict, a.rules, a.taken_at
+    select ta.name as analyte_name, ta.frequency_hours, a.value, a.unit, a.verdict, a.severity, a.rules, a.taken_at
     from tank_analytes ta
     left join lateral (
-      select x.value, x.unit, x.verdict, x.rules, x.taken_at from analyses x
+      select x.value, x.unit, x.verdict, x.severity, x.rules, x.taken_at from analyses x
       where x.analyte_id = ta.id and x.taken_at <= ${asOf}
         and not exists (select 1 from analyses c where c.supersedes_id = x.id)
       order by x.taken_at desc limit 1
@@ -44,6 +45,7 @@ export function tankStatus(code: string, name: string, asOf: Date, rows: readonl
     unit: r.unit ?? '',
     analysedAt: new Date(r.taken_at!).toISOString(),
     status: r.verdict ?? 'in_range',
+    withinSpec: (r.severity ?? 0) < 3,
   }));
   const notes: string[] = [];
   const missing = rows.filter((r) => r.taken_at === null).map((r) => r.analyte_name);
@@ -52,10 +54,11 @@ export function tankStatus(code: string, name: string, asOf: Date, rows: readonl
   for (const r of stale) {
     notes.push(`${r.analyte_name} was last analysed ${hours(asOf.getTime() - new Date(r.taken_at!).getTime())} h before the run (schedule: every ${r.frequency_hours} h).`);
   }
-  const ruleFired = analysed.filter((r) => (r.rules ?? []).length > 0).map((r) => r.analyte_name);
-  if (ruleFired.length) notes.push(`A control rule had fired on ${ruleFired.join(', ')}.`);
+  // Control rules are the shop's own early warning: shown to the supervisor, not printed for the customer.
+  const rulesFired = analysed.filter((r) => (r.rules ?? []).length > 0).map((r) => r.analyte_name);
   const inControl = analysed.length === 0 ? null : analysed.every((r) => r.verdict !== 'out_of_range' && (r.rules ?? []).length === 0);
-  return { code, name, inControl, analyses, note: notes.length ? notes.join(' ') : null };
+  const withinSpec = analysed.length === 0 ? null : analyses.every((a) => a.withinSpec);
+  return { code, name, inControl, withinSpec, analyses, note: notes.length ? notes.join(' ') : null, rulesFired };
 }
 
 export async function bathSnapshot(db: Db, runs: readonly LotRun[]): Promise<BathSnapshot> {

@@ -9,8 +9,13 @@ import { describeRecord, PROCESS_RECORD_LABELS } from '../process/rules';
 import { DISPOSITION_LABELS, type LotRecord } from '../lot-types';
 import { methodLabel } from '../methods';
 
-export type BathAnalysis = { analyte: string; value: number; unit: string; analysedAt: string; status: 'in_range' | 'near_limit' | 'out_of_range' };
-export type BathTank = { code: string; name: string; inControl: boolean | null; analyses: BathAnalysis[]; note: string | null };
+/**
+ * `status` and `inControl` are the shop's own working band and control rules (for the supervisor);
+ * `withinSpec` is what the certificate tells the customer: inside the specification limits or not.
+ * Certificates issued before `withinSpec` was recorded lack it.
+ */
+export type BathAnalysis = { analyte: string; value: number; unit: string; analysedAt: string; status: 'in_range' | 'near_limit' | 'out_of_range'; withinSpec?: boolean };
+export type BathTank = { code: string; name: string; inControl: boolean | null; withinSpec?: boolean | null; analyses: BathAnalysis[]; note: string | null; rulesFired?: string[] };
 export type BathSnapshot = { available: true; tanks: BathTank[] } | { available: false; note: string };
 
 export type CertificateContent = {

@@ -15,7 +15,7 @@ import { type Actor, audit, lockOrder, requireActor } from '../access';
 import { bathSnapshot } from './bath-snapshot';
 import { buildCertificateContent, type CertificateContent, type ShopDetails } from './content';
 import { renderCertificatePdf } from './pdf';
-import { lotChecks } from '../lot-checks';
+import { certificateChecks } from '../lot-checks';
 import { loadLot } from '../lot';
 import { shopTimeZone } from '../shop-time';
 
@@ -42,7 +42,11 @@ export async function issueCertificate(
     if (lot.certificate) {
       throw new AppError('CONFLICT', `Certificate ${lot.certificate.number} was already issued for this order; an issued certificate cannot be changed.`);
     }
-    const failing = lotChecks(lot).filter((c) => !c.ok);
+    const all = certificateChecks(lot).filter((c) => !c.ok);
+    // The order cannot pass inspection while a record fails, so those come first; the inspection
+    // step itself is named once every record is in order.
+    const records = all.filter((c) => c.key !== 'inspected');
+    const failing = records.length ? records : all;
     if (failing.length) {
       const messages = failing.filter((c) => !(c.key === 'thickness_pass' && lot.readings.length === 0)).map((c) => c.message);
       throw new AppError('CONFLICT', `The certificate cannot be issued yet. ${messages.join(' ')}`);

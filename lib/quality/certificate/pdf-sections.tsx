@@ -1,5 +1,5 @@
 // Sections of the certificate PDF: the readings table, the bake record and the bath analyses.
-import type { CertificateContent } from './content';
+import type { BathTank, CertificateContent } from './content';
 import { Fact, type Kit, pdfStyles, um } from './pdf-style';
 
 /** Readings printed in full up to this many; the rest stay in the shop's record. */
@@ -73,6 +73,15 @@ export function BakeSection({ k, c, at }: { k: Kit; c: CertificateContent; at: (
 
 const BATH_STATUS: Record<string, string> = { in_range: 'in range', near_limit: 'near a limit', out_of_range: 'out of range' };
 
+/** The tank's condition as the customer reads it: against the specification limits, not the shop's control band. */
+function tankWords(tank: BathTank): string {
+  if (tank.analyses.length === 0) return 'no analysis on record before the run';
+  if (tank.withinSpec === undefined) return tank.inControl ? 'every analysis within its limits' : 'see the analyses below';
+  return tank.withinSpec
+    ? 'every analysis within its specification limits'
+    : "outside a specification limit; the lot was released by a supervisor's recorded disposition";
+}
+
 export function BathSection({ k, c, at }: { k: Kit; c: CertificateContent; at: (t: string) => string }) {
   const { Text, View } = k;
   // One line per tank: its runs' amp-hours together and when the last one ended.
@@ -95,11 +104,11 @@ export function BathSection({ k, c, at }: { k: Kit; c: CertificateContent; at: (
           <View key={tank.code} style={{ marginTop: 3 }}>
             <Text style={{ fontWeight: 600 }}>
               {tank.code} {tank.name}:{' '}
-              {tank.inControl === null ? 'no analysis on record before the run' : tank.inControl ? 'in control' : 'not in control'}
+              {tankWords(tank)}
             </Text>
             {tank.analyses.map((a, i) => (
               <Text key={i}>
-                {a.analyte}: {a.value} {a.unit}, {BATH_STATUS[a.status] ?? a.status}, analysed {at(a.analysedAt)}
+                {a.analyte}: {a.value} {a.unit}, {a.withinSpec === undefined ? (BATH_STATUS[a.status] ?? a.status) : a.withinSpec ? 'within specification' : 'outside specification'}, analysed {at(a.analysedAt)}
               </Text>
             ))}
             {tank.note ? <Text style={pdfStyles.muted}>{tank.note}</Text> : null}

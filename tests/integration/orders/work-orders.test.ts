@@ -6,6 +6,10 @@ import { findPlatingRuns, findPortalOrders, findWorkOrderEvents, getWorkOrder } 
 import { logPlatingRun, type RunInput } from '@/lib/orders/runs';
 import { acceptQuote, markQuoteSent } from '@/lib/quotes/lifecycle';
 import { addQuoteLine, createQuote } from '@/lib/quotes/mutations';
+import { logAnalysis } from '@/lib/bath/log-analysis';
+import { nonconformanceCheck } from '@/lib/quality/lot-checks';
+import { loadLot } from '@/lib/quality/lot';
+import { actor as bathActor, key, makeTank } from '../bath/fixtures';
 import { finishId, makeCustomer, outcome, staff, suffix, type TestCustomer } from '../quotes/fixtures';
 
 afterAll(() => db.destroy());
@@ -150,5 +154,39 @@ describe('customer scoping and job cost', () => {
     expect(after.rows.find((r) => r.key === 'labour')!.actualCents).toBe(1050);
     // Tank time: 1 h at the rack rate of 3500 ¢.
     expect(after.rows.find((r) => r.key === 'tankTime')!.actualCents).toBe(3500);
+  });
+});
+
+describe('a run made while the bath is outside its specification limits', () => {
+  it('opens a bath nonconformance that must be dispositioned before inspection', async () => {
+    // A zinc tank of our own, so no other test's bath is touched.
+    const tank = await makeTank('alkaline-zinc');
+    await db.updateTable('tanks').set({ efficiency: 0.72, element: 'Zn', ion_charge: 2 }).where('id', '=', tank.id).execute();
+    // The demo shop's specification limits for zinc metal (invented for the demo): 5 to 10.5 g/L.
+    await db.updateTable('tank_analytes').set({ lower_spec: 5, upper_spec: 10.5 }).where('id', '=', tank.analytes.zinc!.id).execute();
+    try {
+      const plater = await bathActor('plater');
+      // An outside lab reports 4.2 g/L: below the specification.
+      const logged = await logAnalysis(plater, { key: key(), tankId: tank.id, analyteId: tank.analytes.zinc!.id, inputs: {}, reportedValue: 4.2, takenAt: new Date(Date.now() - 60_000), source: 'lab' });
+      expect(logged.message).toBe('4.2 g/L is below the lower specification limit (5 g/L).');
+
+      const id = await order('screw', 'ZN-B633-SC2-HS', 200);
+      await advanceWorkOrder(people.plater, step(id, 'received', { quantityReceived: 200 }));
+      const r = await logPlatingRun(people.plater, run(id, tank.id, { partsPerLoad: 200 }));
+      expect(r.bathOutside).toEqual(['Zinc metal 4.2 g/L']);
+      const nc = await db.selectFrom('nonconformances').select(['id', 'source', 'description', 'disposition']).where('work_order_id', '=', id).where('source', '=', 'bath').executeTakeFirstOrThrow();
+      expect(nc.description).toBe(`Run on ${tank.code} while its bath was outside specification limits: Zinc metal 4.2 g/L.`);
+      expect(nc.disposition).toBeNull();
+      // The open nonconformance holds the lot at inspection, as any other does.
+      const lot = await loadLot(db, id);
+      expect(nonconformanceCheck(lot!).ok).toBe(false);
+
+      // Back inside the limits: the next run opens nothing.
+      await logAnalysis(plater, { key: key(), tankId: tank.id, analyteId: tank.analytes.zinc!.id, inputs: {}, reportedValue: 7.4, takenAt: new Date(), source: 'lab' });
+      const again = await logPlatingRun(people.plater, run(id, tank.id, { partsPerLoad: 200 }));
+      expect(again.bathOutside).toEqual([]);
+    } finally {
+      await db.updateTable('tanks').set({ is_active: false }).where('id', '=', tank.id).execute();
+    }
   });
 });

@@ -4,7 +4,7 @@ import { recordBake } from '@/lib/quality/bake/records';
 import { certificatePdfFor, getCustomerCertificate, issueCertificate, findCustomerCertificates } from '@/lib/quality/certificate';
 import { dispositionNonconformance, openNonconformance } from '@/lib/quality/nonconformances';
 import { recordReadings } from '@/lib/quality/thickness';
-import { actorFor, BUYER, createLot, errorOf, ESTIMATOR, OTHER_CUSTOMER, passingReadings, PLATER, SUPERVISOR } from './fixtures';
+import { actorFor, BUYER, createLot, errorOf, ESTIMATOR, inspect, OTHER_CUSTOMER, passingReadings, PLATER, SUPERVISOR } from './fixtures';
 
 afterAll(() => db.destroy());
 
@@ -76,6 +76,11 @@ describe('an issued certificate', () => {
       { workOrderId: lot.id, platingEnded: '2026-06-10T10:00', bakeStarted: '2026-06-10T11:30', timeZone: 'America/New_York', oven: 'Oven 1', tempMinC: 198, tempMaxC: 203, durationH: 12.5 },
       LATER,
     );
+    // Every record passes, but the order is still at "plated": the certificate waits for inspection.
+    expect(await errorOf(issueCertificate(supervisor, lot.id))).toBe(
+      'CONFLICT: The certificate cannot be issued yet. The order is plated, not yet inspected: a certificate is issued once the lot passes inspection.',
+    );
+    await inspect(db, lot.id);
     const cert = await issueCertificate(supervisor, lot.id, new Date('2026-06-12T15:00:00Z'));
     expect(cert.number).toMatch(/^CC2026-\d{5}$/);
     const c = cert.content;
@@ -128,6 +133,7 @@ describe('an issued certificate', () => {
     readings[0] = { ...readings[0]!, thicknessUm: 7.5 };
     const r = await recordReadings(plater, { workOrderId: lot.id, entry: 'manual', readings });
     await dispositionNonconformance(supervisor, { nonconformanceId: r.nonconformanceId!, disposition: 'use_as_is', customerApprovalRef: 'NGF deviation D-204' });
+    await inspect(db, lot.id);
     const cert = await issueCertificate(supervisor, lot.id);
     expect(cert.content.thickness.failingAcceptedByDisposition).toBe(1);
     expect(cert.content.nonconformances).toEqual([

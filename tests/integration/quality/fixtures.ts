@@ -4,6 +4,7 @@
 import { randomInt } from 'node:crypto';
 import { sql, type Kysely } from 'kysely';
 import type { Database, WorkOrderState } from '@/db/types';
+import { changeWorkOrderState } from '@/lib/orders/states';
 import type { Actor } from '@/lib/quality/access';
 
 export type LotOptions = {
@@ -94,5 +95,15 @@ export async function errorOf(p: Promise<unknown>): Promise<string> {
     return 'none';
   } catch (e) {
     return e instanceof Error ? `${(e as { code?: string }).code ?? e.name}: ${e.message}` : String(e);
+  }
+}
+
+/** Moves a lot whose records pass through its bake (where it has one) to inspected: certificates come after inspection. */
+export async function inspect(db: Kysely<Database>, workOrderId: string): Promise<void> {
+  const supervisor = await actorFor(db, SUPERVISOR);
+  const wo = await db.selectFrom('work_orders').select(['state', 'bake_required']).where('id', '=', workOrderId).executeTakeFirstOrThrow();
+  const steps: WorkOrderState[] = wo.state === 'plated' && wo.bake_required ? ['baked', 'inspected'] : ['inspected'];
+  for (const to of steps) {
+    await db.transaction().execute((trx) => changeWorkOrderState(trx, { workOrderId, to, actorId: supervisor.id, note: 'Quality records complete' }));
   }
 }

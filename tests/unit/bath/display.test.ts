@@ -26,7 +26,8 @@ describe('bath display units', () => {
   });
 
   it('formats times the same on server and browser', () => {
-    expect(formatWhen('2026-11-30T07:05:00Z')).toBe('30/11/2026, 07:05 UTC');
+    // The shop's zone (the demo shop's America/New_York: EST is UTC−5 in November, IANA tz database).
+    expect(formatWhen('2026-11-30T07:05:00Z')).toBe('30 Nov 2026, 02:05 EST');
     expect(formatWhen('not a date')).toBe('—');
   });
 });

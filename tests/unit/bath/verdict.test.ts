@@ -25,6 +25,12 @@ describe('judgeValue', () => {
     expect(outSpec.message).toMatch(/above the upper specification limit \(330\)/);
   });
 
+  it('says the value once, to four significant figures, with its unit when given', () => {
+    const zinc: Limits = { target: 60, lowerControl: 50, upperControl: 70, lowerSpec: 45, upperSpec: 75 };
+    expect(judgeValue(41.08538, zinc, { unit: 'g/L' }).message).toBe('41.09 g/L is below the lower specification limit (45 g/L).');
+    expect(judgeValue(41.08538, zinc).message).toBe('41.09 is below the lower specification limit (45).');
+  });
+
   it('handles one-sided limits (a contaminant with only a maximum)', () => {
     const cr3: Limits = { target: 1.5, upperControl: 3, upperSpec: 4 };
     expect(judgeValue(0, cr3).status).toBe('in_range');

@@ -99,27 +99,28 @@ describe('field messages', () => {
     expect(view.result).toBeNull();
     // Source: ASTM B850 Table 1 (39–43 HRC: 14 h), reference §7; silver is plated from cyanide (reference §2).
     expect(view.safety.map((n) => n.kind)).toEqual(['cyanide', 'high-strength-steel-bake']);
-    expect(view.metalCaution).toBeNull();
-    expect(recomputeWorkbench(metricForm(), 'metric').metalCaution).toMatch(/Nickel and cobalt salts are skin and respiratory sensitisers/);
+    // Every bath: current and hydrogen (reference §12); cyanide is already said above, so not twice.
+    expect(view.bathCautions).toEqual(['electrical', 'hydrogen']);
+    expect(recomputeWorkbench(metricForm(), 'metric').bathCautions).toEqual(['electrical', 'hydrogen', 'nickel']);
+    // Acid copper sulfate is a strong-acid bath; chromic acid too, with hexavalent chromium said above.
+    expect(recomputeWorkbench(metricForm({ metalKey: 'Cu2+' }), 'metric').bathCautions).toContain('acid');
+    expect(recomputeWorkbench(metricForm({ metalKey: 'Cr6+' }), 'metric').bathCautions).toEqual(expect.arrayContaining(['acid', 'heat']));
+    // Zinc may be acid or alkaline: the finish's words decide.
+    expect(recomputeWorkbench(metricForm({ metalKey: 'Zn2+' }), 'metric', 'Alkaline zinc, clear trivalent passivate').bathCautions).toContain('caustic');
+    expect(recomputeWorkbench(metricForm({ metalKey: 'Zn2+' }), 'metric').bathCautions).not.toContain('caustic');
+  });
+
+  it('starts from the same part in either unit system, so the amp-hours do not change with the units', () => {
+    const metric = recomputeWorkbench(metricForm(), 'metric');
+    const us = recomputeWorkbench(usForm(), 'us');
+    // 50 × 30 × 10 mm block: 2(50·30 + 50·10 + 30·10) = 4600 mm² = 0.46 dm² (geometry by hand).
+    expect(metric.geometry?.areaDm2).toBeCloseTo(0.46, 9);
+    // The US form shows it in inches to six significant figures (1.9685 × 1.1811 × 0.393701 in).
+    expect(us.geometry?.areaDm2).toBeCloseTo(0.46, 5);
+    expect(us.result?.estimate.nominal.ampHoursLot).toBeCloseTo(metric.result!.estimate.nominal.ampHoursLot, 2);
   });
 
   it('asks for an STL file when STL is chosen and none is measured', () => {
     expect(recomputeWorkbench(metricForm({ geometryMode: 'stl' }), 'metric').fieldErrors).toEqual({ stl: ['Choose an STL file of the part.'] });
-  });
-});
-
-describe('recompute time', () => {
-  it('recomputes well inside one 16 ms frame', () => {
-    const form = defaultForm('us', []);
-    const times: number[] = [];
-    for (let i = 0; i < 400; i++) {
-      const t0 = performance.now();
-      recomputeWorkbench({ ...form, quantity: String(100 + i) }, 'us');
-      times.push(performance.now() - t0);
-    }
-    times.sort((a, b) => a - b);
-    const median = times[times.length >> 1]!;
-    console.log(`[workbench] recompute median ${median.toFixed(3)} ms, worst ${times.at(-1)!.toFixed(3)} ms over ${times.length} runs (frame budget 16 ms)`);
-    expect(median).toBeLessThan(16);
   });
 });

@@ -33,12 +33,15 @@ describe('buildCertificateContent', () => {
     expect(c.thickness.meanUm).toBeCloseTo(10.4375, 10);
   });
 
-  it('judges a tank "in control" only when every analysis is in its limits with no rule fired', () => {
+  it('judges a tank "in control" only when every analysis is in its limits with no rule fired; the customer sees the specification', () => {
     const asOf = new Date('2026-06-10T14:00:00Z');
-    const row = (over: object) => ({ analyte_name: 'Zinc metal', frequency_hours: 8, value: 9.5, unit: 'g/L', verdict: 'in_range' as const, rules: [], taken_at: new Date('2026-06-10T10:00:00Z'), ...over });
-    expect(tankStatus('Z-ZN1', 'Alkaline zinc', asOf, [row({})])).toMatchObject({ inControl: true, note: null });
-    expect(tankStatus('Z-ZN1', 'Alkaline zinc', asOf, [row({ verdict: 'out_of_range' })]).inControl).toBe(false);
-    expect(tankStatus('Z-ZN1', 'Alkaline zinc', asOf, [row({ rules: ['we1_beyond_3s'] })])).toMatchObject({ inControl: false, note: 'A control rule had fired on Zinc metal.' });
+    const row = (over: object) => ({ analyte_name: 'Zinc metal', frequency_hours: 8, value: 9.5, unit: 'g/L', verdict: 'in_range' as const, severity: 0, rules: [], taken_at: new Date('2026-06-10T10:00:00Z'), ...over });
+    expect(tankStatus('Z-ZN1', 'Alkaline zinc', asOf, [row({})])).toMatchObject({ inControl: true, withinSpec: true, note: null });
+    // Outside the control band but inside the specification: the shop's concern, not the customer's.
+    expect(tankStatus('Z-ZN1', 'Alkaline zinc', asOf, [row({ verdict: 'out_of_range', severity: 2 })])).toMatchObject({ inControl: false, withinSpec: true });
+    expect(tankStatus('Z-ZN1', 'Alkaline zinc', asOf, [row({ verdict: 'out_of_range', severity: 3 })])).toMatchObject({ inControl: false, withinSpec: false });
+    // A fired control rule stays with the supervisor: no note for the certificate.
+    expect(tankStatus('Z-ZN1', 'Alkaline zinc', asOf, [row({ rules: ['we1_beyond_3s'] })])).toMatchObject({ inControl: false, withinSpec: true, note: null, rulesFired: ['Zinc metal'] });
     expect(tankStatus('Z-ZN1', 'Alkaline zinc', asOf, [row({ taken_at: new Date('2026-06-09T14:00:00Z') })]).note).toBe(
       'Zinc metal was last analysed 24 h before the run (schedule: every 8 h).',
     );

@@ -2,7 +2,9 @@ import { describe, expect, it } from 'vitest';
 import { bathMetalGPerL, DEFAULT_DRAG_OUT_L_PER_M2, processForFinish, type TankFacts } from '@/lib/quotes/process';
 import { bakeDecision } from '@/lib/quotes/bake-rule';
 import { canRevise, effectiveQuoteStatus, expiryFrom, isEditable, nextRevision, quoteLabel } from '@/lib/quotes/status';
-import { formatUnitPrice } from '@/lib/quotes/format';
+import { formatRate, formatUnitPrice } from '@/lib/quotes/format';
+import { componentFigures } from '@/lib/quotes/display';
+import type { CostComponent } from '@/lib/quotes/pricing';
 import { catchError } from '../plating/catch-error';
 
 describe('quote status rules', () => {
@@ -26,6 +28,12 @@ describe('quote status rules', () => {
 
   it('writes unit prices with their fractions of a cent', () => {
     expect([formatUnitPrice(186.632), formatUnitPrice(1850), formatUnitPrice(5952.381)]).toEqual(['$1.86632', '$18.50', '$59.52381']);
+  });
+
+  it('writes rates to four significant figures with cents always shown', () => {
+    // $3.80/kg of nickel is 380 × 0.45359237 = 172.365 ¢/lb (NIST SP 811 App. B.8: 1 lb = 0.45359237 kg).
+    expect(componentFigures({ unit: 'kg', quantity: 1, rateCents: 380 } as CostComponent, 'us').rate).toBe('$1.724/lb');
+    expect([formatRate(12.345), formatRate(3850), formatRate(550), formatRate(0)]).toEqual(['$0.1235', '$38.50', '$5.50', '$0.00']);
   });
 });
 

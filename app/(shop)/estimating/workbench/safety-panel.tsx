@@ -27,10 +27,7 @@ export function SafetyPanel(p: PanelProps & { view: WorkbenchView }) {
             {n.detail}
           </Caution>
         ))}
-        <Caution kind="electrical" compact>
-          {/* The metal's own hazard (e.g. nickel salts sensitise skin) when no caution above already says it. */}
-          {view.metalCaution}
-        </Caution>
+        {view.bathCautions.length ? <Caution kind={view.bathCautions} compact /> : null}
 
         {result?.galvanic ? (
           <div className="text-sm" data-testid="galvanic">

@@ -39,9 +39,10 @@ export function Workbench({ system, library, initial, initialTitle }: Props) {
   // Every keystroke: the same engine as the server, timed so the page can show it stays in a frame.
   const { view, ms } = useMemo(() => {
     const t0 = performance.now();
-    const v = recomputeWorkbench(form, system);
+    const finish = library.find((l) => l.finishId === form.finishId);
+    const v = recomputeWorkbench(form, system, finish ? `${finish.name} ${finish.specText}` : '');
     return { view: v, ms: performance.now() - t0 };
-  }, [form, system]);
+  }, [form, system, library]);
 
   useEffect(() => {
     if (initial) return;

@@ -35,7 +35,7 @@ type Props = {
 export function AdditionForm({ tank, analytes, defaults, system, title = 'Record the addition made' }: Props) {
   const baseUnit = defaults.unit ?? 'kg';
   const [unit, setUnit] = useState<string>(displayUnitOf(baseUnit, system));
-  const shownDefault = defaults.amount != null ? String(roundForDisplay(convertSymbol(defaults.amount, baseUnit, displayUnitOf(baseUnit, system)), 3)) : '';
+  const shownDefault = defaults.amount != null ? String(roundForDisplay(convertSymbol(defaults.amount, baseUnit, displayUnitOf(baseUnit, system)))) : '';
   const [amount, setAmount] = useState(shownDefault);
   const [material, setMaterial] = useState(defaults.material ?? '');
   const [analyteId, setAnalyteId] = useState(defaults.analyteId ?? '');

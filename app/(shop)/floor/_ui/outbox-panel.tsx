@@ -1,5 +1,6 @@
 'use client';
 
+import { useRouter } from 'next/navigation';
 import { useEffect, useState } from 'react';
 import { Button } from '@/components/ui/button';
 import { StatusShape } from '@/components/ui/status-shape';
@@ -12,6 +13,10 @@ import { floorQueue, useFloorOutbox } from '@/lib/floor/browser-queue';
 export function OutboxPanel() {
   const entries = useFloorOutbox();
   const [online, setOnline] = useState(true);
+  const router = useRouter();
+  // Whatever this device sends (now, or later when the connection returns), the page's own lists
+  // (recent entries, last values) are read again from the server so they show it without a reload.
+  useEffect(() => floorQueue().onSent(() => router.refresh()), [router]);
   useEffect(() => {
     setOnline(navigator.onLine);
     const up = () => setOnline(true);

@@ -31,7 +31,7 @@ export default async function JobCostsPage({ searchParams }: { searchParams: Pro
     <div className="flex flex-col gap-5">
       <PageHeader
         title="Job costs"
-        description={`Quoted against actual cost of plated work orders whose runs ended between ${formatDay(from)} and ${formatDay(to)}. Actual cost comes from the logged runs at the rates each quote used.`}
+        description={`Quoted against actual cost of plated work orders whose runs ended between ${formatDay(from)} and ${formatDay(to)}. Actual cost comes from the logged runs at the rates each quote used; variance is actual less quoted cost, so a positive variance cost more than quoted.`}
       />
       <form className="flex flex-wrap items-end gap-3 text-sm" method="get">
         <input type="hidden" name="by" value={by} />
@@ -95,6 +95,7 @@ export default async function JobCostsPage({ searchParams }: { searchParams: Pro
                   <Th>Month</Th>
                   <Th numeric>Quoted cost</Th>
                   <Th numeric>Actual cost</Th>
+                  <Th numeric>Variance</Th>
                   <Th numeric>Realised margin</Th>
                 </tr>
               </THead>
@@ -107,6 +108,7 @@ export default async function JobCostsPage({ searchParams }: { searchParams: Pro
                     <Td>{r.month}</Td>
                     <Td numeric><Money cents={r.comparison.quotedCostCents} /></Td>
                     <Td numeric><Money cents={r.comparison.actualCostCents} /></Td>
+                    <Td numeric><Money cents={r.comparison.varianceCents} accounting /></Td>
                     <Td numeric>{r.comparison.realisedMarginPct === null ? '—' : `${r.comparison.realisedMarginPct} %`}</Td>
                   </Tr>
                 ))}

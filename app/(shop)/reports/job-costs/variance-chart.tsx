@@ -18,7 +18,8 @@ export function VarianceChart({ data, groupLabel }: { data: VarianceBar[]; group
         <XAxis dataKey="key" tick={{ fill: chartColors.inkMuted, fontSize: 12 }} stroke={chartColors.line} />
         <YAxis tickFormatter={dollars} tick={{ fill: chartColors.inkMuted, fontSize: 12 }} stroke={chartColors.line} width={88} />
         <Tooltip formatter={(v) => dollars(Number(v))} />
-        <Legend />
+        {/* In the bars' own order (the legend sorts by name unless told not to). */}
+        <Legend itemSorter={null} />
         <Bar dataKey="quoted" name="Quoted cost" fill={chartColors.action} />
         <Bar dataKey="actual" name="Actual cost" fill={chartColors.copperDeep} />
         <Bar dataKey="price" name="Price" fill={chartColors.inkMuted} />

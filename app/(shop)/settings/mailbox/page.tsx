@@ -6,6 +6,7 @@ import { FormMessage } from '@/components/ui/form-message';
 import { PageHeader } from '@/components/ui/page-header';
 import { requirePageUser } from '@/lib/auth/current-user';
 import { fetchMailbox, isDemoMode } from '@/lib/email/mailbox';
+import { formatDateTime } from '@/lib/quotes/format';
 
 export const metadata: Metadata = { title: 'Demo mailbox' };
 export const dynamic = 'force-dynamic';
@@ -43,7 +44,7 @@ export default async function MailboxPage() {
       <ol className="flex flex-col gap-4">
         {messages.map((m) => (
           <li key={m.id}>
-            <Card title={m.subject} description={`To ${m.to.join(', ')} · ${new Date(m.date).toLocaleString('en-US')}`}>
+            <Card title={m.subject} description={`To ${m.to.join(', ')} · ${formatDateTime(m.date)}`}>
               <pre className="font-sans text-sm whitespace-pre-wrap">
                 <Linkified text={m.text} />
               </pre>

@@ -6,6 +6,7 @@ import { Badge } from '@/components/ui/badge';
 import { buttonClasses, LinkButton } from '@/components/ui/button';
 import { Card } from '@/components/ui/card';
 import { Caution } from '@/components/ui/caution';
+import { finishHazards } from '@/lib/finishes/hazards';
 import { PageHeader } from '@/components/ui/page-header';
 import { StatusBadge } from '@/components/ui/status-badge';
 import { Table, TBody, Td, Th, THead, Tr } from '@/components/ui/table';
@@ -125,7 +126,17 @@ export default async function WorkOrderPage({ params }: { params: Promise<{ work
         </Card>
       </div>
 
-      {wo.bake_required ? <Caution kind="high-strength-steel-bake" /> : null}
+      <Caution
+        kind={finishHazards({
+          family: wo.family,
+          familyParams: wo.family_params,
+          element: wo.element,
+          ionCharge: wo.ion_charge,
+          route: wo.process_route,
+          bakeRequired: wo.bake_required,
+          words: `${wo.finish_name} ${wo.spec_text}`,
+        })}
+      />
 
       <Card title={runsWithCurrent ? 'Plating runs' : 'Runs'} padding="none" actions={mayLog ? <LinkButton href={`/work-orders/${wo.id}/log-run`} variant="secondary" size="sm">Log a run</LinkButton> : null}>
         {runs.length === 0 ? (

@@ -18,6 +18,7 @@ const TITLES: Record<LotCheck['key'], string> = {
   passivation_lot: 'Passivation window',
   passivation_test: 'Verification test',
   salt_spray: 'Salt spray',
+  inspected: 'Inspection',
 };
 
 /** Where the lot stands against each record a certificate needs, and the certificate itself. */
@@ -45,9 +46,13 @@ export function CertificateCard({ lot, checks, bath, tz, canIssue }: { lot: LotR
               {!bath.available
                 ? bath.note
                 : bath.tanks
-                    .map((t) => `${t.code}: ${t.inControl === null ? 'no analysis before the run' : t.inControl ? 'in control' : 'not in control'}`)
+                    .map(
+                      (t) =>
+                        `${t.code}: ${t.inControl === null ? 'no analysis before the run' : t.inControl ? 'in control' : 'not in control'}` +
+                        `${t.withinSpec === false ? ', outside a specification limit' : ''}${t.rulesFired?.length ? ` (control rule fired on ${t.rulesFired.join(', ')})` : ''}`,
+                    )
                     .join('; ')}
-              . Printed on the certificate as recorded.
+              . The certificate prints each analysis against its specification limits; the control band and rules stay in the shop.
             </span>
           </li>
         </ul>

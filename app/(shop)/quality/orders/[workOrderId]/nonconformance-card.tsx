@@ -4,7 +4,7 @@ import { DISPOSITION_LABELS, type LotRecord } from '@/lib/quality/lot-types';
 import { formatShopTime } from '@/lib/quality/shop-time';
 import { DispositionForm, OpenNonconformanceForm } from './small-forms';
 
-const SOURCE: Record<string, string> = { thickness: 'Thickness', bake: 'Relief bake', other: 'Other' };
+const SOURCE: Record<string, string> = { thickness: 'Thickness', bake: 'Relief bake', bath: 'Bath outside specification', other: 'Other' };
 
 export function NonconformanceCard({ lot, tz, canOpen, canDisposition }: { lot: LotRecord; tz: string; canOpen: boolean; canDisposition: boolean }) {
   const open = lot.nonconformances.filter((n) => n.disposition === null).length;

@@ -7,7 +7,7 @@ import { PageHeader } from '@/components/ui/page-header';
 import { can, requirePageUser } from '@/lib/auth/current-user';
 import { STATE_LABELS } from '@/lib/orders/states';
 import { phosphorusRangeFor } from '@/lib/families/electroless-nickel';
-import { lotBake, lotChecks, lotFamily, thicknessState } from '@/lib/quality/lot-checks';
+import { certificateChecks, lotBake, lotChecks, lotFamily, thicknessState } from '@/lib/quality/lot-checks';
 import { getLotView } from '@/lib/quality/lot-view';
 import { shopTimeZone } from '@/lib/quality/shop-time';
 import { BakeCard } from './bake-card';
@@ -72,7 +72,7 @@ export default async function LotQualityPage({ params }: { params: Promise<{ wor
           </LinkButton>
         }
       />
-      <CertificateCard lot={lot} checks={checks} bath={bath} tz={tz} canIssue={can(user, 'certificates.issue')} />
+      <CertificateCard lot={lot} checks={certificateChecks(lot)} bath={bath} tz={tz} canIssue={can(user, 'certificates.issue')} />
       {bakeFirst ? bake : null}
       {needsThickness ? (
         <ThicknessCard lot={lot} t={t} units={units} tz={tz} canRecord={can(user, 'quality.record')} canVoid={can(user, 'quality.disposition')} open={OPEN_STATES.has(o.state)} />

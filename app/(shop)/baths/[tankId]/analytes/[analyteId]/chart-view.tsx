@@ -90,7 +90,7 @@ export function ChartView({ tankId, analyteId }: { tankId: string; analyteId: st
       {data ? (
         <>
           {data.limits ? (
-            <ControlChart points={data.points} cl={data.limits.cl} ucl={data.limits.ucl} lcl={data.limits.lcl} lsl={data.limits.lsl} usl={data.limits.usl} unit={data.unit} label={data.analyte.name} height={360} timeZone="UTC" />
+            <ControlChart points={data.points} cl={data.limits.cl} ucl={data.limits.ucl} lcl={data.limits.lcl} lsl={data.limits.lsl} usl={data.limits.usl} unit={data.unit} label={data.analyte.name} height={360} />
           ) : null}
           <dl className="grid gap-3 text-sm sm:grid-cols-4">
             <div><dt className="text-ink-muted">Analyses shown</dt><dd className="text-lg font-semibold tabular">{data.points.length}</dd></div>
