@@ -9,6 +9,7 @@ import 'server-only';
 // The select must name each column's value with its column id (for the CSV), and must not use
 // GROUP BY or DISTINCT (the count reuses its FROM and WHERE); wrap such a query as a subquery:
 // `db.selectFrom(grouped.as('t')).selectAll()` with expressions `t.<col>`.
+import { conditionalJson } from '@/lib/http-etag';
 import type { Expression, SelectQueryBuilder } from 'kysely';
 import { sql } from 'kysely';
 import { contentDisposition, csvLine } from './csv';
@@ -129,5 +130,6 @@ export async function gridResponse<DB, TB extends keyof DB, O>(
     });
   }
   const page = await runGridQuery(qb, opts, query);
-  return Response.json(page, { headers: { 'cache-control': 'no-store' } });
+  // A revalidation that finds the same page answers 304 without a body (lib/http-etag.ts).
+  return conditionalJson(req, page);
 }

@@ -11,7 +11,8 @@ export const RUN_DIR = path.join(ROOT, '.run');
 export const BENCH_DIST_DIR = '.next-bench';
 export const BENCH_APP_PORT = 3300;
 
-export type RunningServer = { url: string; stop: () => Promise<void> };
+/** `pid` leads the server's own process group (what `next start` forks is in it too). */
+export type RunningServer = { url: string; pid: number; stop: () => Promise<void> };
 
 const running = new Set<ChildProcess>();
 
@@ -85,7 +86,7 @@ export async function startServer(opts: { label: string; cwd: string; args: stri
     }
     try {
       await fetch(`${url}${opts.readyPath}`, { signal: AbortSignal.timeout(2000) });
-      return { url, stop };
+      return { url, pid: child.pid!, stop };
     } catch {
       if (Date.now() > end) {
         await stop();
@@ -138,14 +139,14 @@ export function buildApp(): Promise<void> {
 }
 
 /** The app, built and served from .next-bench against the bench database (DATABASE_URL). */
-export async function startApp(): Promise<RunningServer> {
+export async function startApp(env: Record<string, string> = {}): Promise<RunningServer> {
   await buildApp();
   const url = `http://127.0.0.1:${BENCH_APP_PORT}`;
   return startNext({
     label: 'bench-app',
     dir: ROOT,
     port: BENCH_APP_PORT,
-    env: { NEXT_DIST_DIR: BENCH_DIST_DIR, APP_URL: url },
+    env: { NEXT_DIST_DIR: BENCH_DIST_DIR, APP_URL: url, ...env },
     readyPath: '/api/health',
   });
 }

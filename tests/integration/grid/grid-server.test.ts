@@ -109,6 +109,31 @@ describe('grid helper on a real table of 100,000 rows', () => {
     });
   });
 
+  it('sends an ETag with each page and answers 304, without a body, when the reader already holds it', async () => {
+    await withProbeTable(async (q) => {
+      const url = 'http://x/api/probe?limit=2';
+      const first = await gridResponse(new Request(url), base(q), OPTS);
+      const etag = first.headers.get('etag');
+      expect(etag).toMatch(/^W\/"[A-Za-z0-9_-]{27}"$/);
+      // Kept by this browser only and asked again every time (RFC 9111 §5.2.2.4 no-cache, §5.2.2.7 private).
+      expect(first.headers.get('cache-control')).toBe('private, no-cache');
+      const again = await gridResponse(new Request(url, { headers: { 'if-none-match': etag! } }), base(q), OPTS);
+      expect(again.status).toBe(304);
+      expect(await again.text()).toBe('');
+      expect(again.headers.get('etag')).toBe(etag);
+      // A list of validators, and the strong form of a weak one, match as RFC 9110 §13.1.2 compares.
+      const listed = await gridResponse(new Request(url, { headers: { 'if-none-match': `"other", ${etag!.slice(2)}` } }), base(q), OPTS);
+      expect(listed.status).toBe(304);
+      // Another page, or the same page after a change, is a new validator and a full answer.
+      const other = await gridResponse(new Request('http://x/api/probe?limit=3', { headers: { 'if-none-match': etag! } }), base(q), OPTS);
+      expect(other.status).toBe(200);
+      await sql`update h5_grid_probe set name = 'changed' where code = 'C000001'`.execute(q);
+      const changed = await gridResponse(new Request(url, { headers: { 'if-none-match': etag! } }), base(q), OPTS);
+      expect(changed.status).toBe(200);
+      expect(changed.headers.get('etag')).not.toBe(etag);
+    });
+  });
+
   it('streams the filtered rows as CSV in batches, quoted and guarded', async () => {
     await withProbeTable(async (q) => {
       const filter = encodeURIComponent(JSON.stringify({ qty: { filterType: 'number', type: 'lessThan', filter: 2500 } }));

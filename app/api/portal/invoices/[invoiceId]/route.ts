@@ -1,12 +1,12 @@
 // GET /api/portal/invoices/:invoiceId — a signed-in customer contact, for their own company's invoices only.
-import { NextResponse } from 'next/server';
 import { portalInvoiceJson } from '@/lib/billing/portal';
 import { AppError } from '@/lib/errors';
 import { withPermission } from '@/lib/http';
+import { conditionalJson } from '@/lib/http-etag';
 
-export const GET = withPermission<{ invoiceId: string }>('portal.use', async (_req, user, ctx) => {
+export const GET = withPermission<{ invoiceId: string }>('portal.use', async (req, user, ctx) => {
   const { invoiceId } = await ctx.params;
   const invoice = await portalInvoiceJson(user, invoiceId);
   if (!invoice) throw new AppError('NOT_FOUND', 'That invoice was not found.');
-  return NextResponse.json({ invoice });
+  return conditionalJson(req, { invoice });
 });

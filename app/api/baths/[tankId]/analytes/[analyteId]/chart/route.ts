@@ -1,9 +1,9 @@
 // GET /api/baths/<tankId>/analytes/<analyteId>/chart?from&to[&limits=baseline][&format=csv] — staff who may read
 // bath records (bath.read): the analyte's individuals chart data, in the reader's units.
-import { NextResponse } from 'next/server';
 import { chartCsv, getChartData, parseChartRange } from '@/lib/bath/chart';
 import { AppError } from '@/lib/errors';
 import { withPermission } from '@/lib/http';
+import { conditionalJson } from '@/lib/http-etag';
 
 export const dynamic = 'force-dynamic';
 
@@ -21,5 +21,5 @@ export const GET = withPermission<{ tankId: string; analyteId: string }>('bath.r
       headers: { 'content-type': 'text/csv; charset=utf-8', 'content-disposition': `attachment; filename="${name}"`, 'cache-control': 'no-store' },
     });
   }
-  return NextResponse.json(data, { headers: { 'cache-control': 'no-store' } });
+  return conditionalJson(req, data);
 });
