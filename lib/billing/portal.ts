@@ -1,6 +1,6 @@
 import 'server-only';
 import type { SessionUser } from '@/lib/auth/current-user';
-import { findInvoices, getInvoiceDetail, type InvoiceDetail, type InvoiceSummary } from './queries';
+import { customerInvoiceTotals, findInvoicePage, getInvoiceDetail, type InvoiceCursor, type InvoiceDetail, type InvoiceSummary } from './queries';
 
 // The customer area's view of invoices: always scoped by the signed-in contact's own customer id,
 // so a foreign or made-up id finds nothing rather than someone else's invoice.
@@ -9,9 +9,16 @@ function scopeOf(user: SessionUser): { customerId: string } | null {
   return user.role === 'customer' && user.customerId ? { customerId: user.customerId } : null;
 }
 
-export async function findPortalInvoices(user: SessionUser): Promise<InvoiceSummary[]> {
+/** A page of the contact's own company's invoices, newest first (see findInvoicePage). */
+export async function findPortalInvoices(user: SessionUser, before: InvoiceCursor | null = null): Promise<{ invoices: InvoiceSummary[]; next: InvoiceCursor | null }> {
   const scope = scopeOf(user);
-  return scope ? findInvoices(scope) : [];
+  return scope ? findInvoicePage(scope.customerId, before) : { invoices: [], next: null };
+}
+
+/** What the company owes over all its invoices and the credit it holds. */
+export async function portalInvoiceTotals(user: SessionUser): Promise<{ openCents: number; creditCents: number }> {
+  const scope = scopeOf(user);
+  return scope ? customerInvoiceTotals(scope.customerId) : { openCents: 0, creditCents: 0 };
 }
 
 export async function getPortalInvoice(user: SessionUser, invoiceId: string): Promise<InvoiceDetail | null> {

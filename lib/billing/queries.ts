@@ -80,6 +80,44 @@ export async function findInvoices(scope: InvoiceScope, filter: InvoiceFilter = 
   return (await q.execute()).map((r) => toSummary(r, today));
 }
 
+/** Where a page of a customer's invoices ends: the next page starts after this one (newest first). */
+export type InvoiceCursor = { issuedOn: string; number: string };
+export const PORTAL_PAGE_SIZE = 50;
+
+/**
+ * One page of a customer's invoices, newest first, by key (issued on, number) so that the tenth
+ * year's page costs what the first does; `next` is where the page after it starts, or null.
+ */
+export async function findInvoicePage(
+  customerId: string,
+  before: InvoiceCursor | null,
+  size: number = PORTAL_PAGE_SIZE,
+  database: Kysely<Database> = defaultDb,
+): Promise<{ invoices: InvoiceSummary[]; next: InvoiceCursor | null }> {
+  if (!isUuid(customerId)) return { invoices: [], next: null };
+  let q = summaryQuery(database).where('i.customer_id', '=', customerId).orderBy('i.issued_on', 'desc').orderBy('i.number', 'desc').limit(size + 1);
+  if (before) q = q.where(sql<boolean>`(i.issued_on, i.number) < (${before.issuedOn}::date, ${before.number})`);
+  const rows = await q.execute();
+  const today = todayIso();
+  const invoices = rows.slice(0, size).map((r) => toSummary(r, today));
+  const last = invoices.at(-1);
+  return { invoices, next: rows.length > size && last ? { issuedOn: last.issuedOn, number: last.number } : null };
+}
+
+/** What a customer owes over every invoice, and the credit it holds on account: sums in SQL, not of a page. */
+export async function customerInvoiceTotals(customerId: string, database: Kysely<Database> = defaultDb): Promise<{ openCents: number; creditCents: number }> {
+  if (!isUuid(customerId)) return { openCents: 0, creditCents: 0 };
+  const r = await database
+    .selectFrom('invoices as i')
+    .select([
+      sql<number>`coalesce(sum(greatest(i.total_cents - i.credited_cents - i.paid_cents, 0)) filter (where i.status in ('issued', 'partly_paid')), 0)::bigint`.as('open'),
+      sql<number>`coalesce(sum(${invoiceExcessSql}) filter (where i.status = 'overpaid'), 0)::bigint`.as('credit'),
+    ])
+    .where('i.customer_id', '=', customerId)
+    .executeTakeFirstOrThrow();
+  return { openCents: Number(r.open), creditCents: Number(r.credit) };
+}
+
 export async function getInvoiceDetail(scope: InvoiceScope, invoiceId: string, database: Kysely<Database> = defaultDb) {
   if (!isUuid(invoiceId)) return null;
   if (scope !== 'staff' && !isUuid(scope.customerId)) return null;

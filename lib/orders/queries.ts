@@ -1,5 +1,5 @@
 import 'server-only';
-import { sql, type Kysely } from 'kysely';
+import { sql, type Kysely, type SqlBool } from 'kysely';
 import { db as defaultDb } from '@/db';
 import type { Database, ProcessFamilyId, ProcessStep } from '@/db/types';
 import { getFamily } from '@/lib/families';
@@ -7,6 +7,7 @@ import type { GridColumns } from '@/lib/grid/server';
 import { activeTankFacts } from '@/lib/quotes/pricing-context';
 import { tanksForFinish } from '@/lib/quotes/process';
 import type { LinePrice } from '@/lib/quotes/pricing';
+import { WORK_ORDER_STATES } from './states';
 
 type Db = Kysely<Database>;
 
@@ -40,7 +41,7 @@ export const WORK_ORDER_GRID_COLUMNS: GridColumns = {
   part: { expr: 'p.part_number', type: 'text', searchable: true, sortable: false, header: 'Part' },
   finish: { expr: 'f.code', type: 'text', sortable: false, header: 'Finish' },
   po_number: { expr: 'w.po_number', type: 'text', searchable: true, sortable: false, header: 'PO' },
-  state: { expr: 'w.state', type: 'text', header: 'State' },
+  state: { expr: 'w.state', type: 'text', header: 'State', choices: { values: WORK_ORDER_STATES, match: (v) => sql<SqlBool>`w.state = ${v}` } },
   due_date: { expr: 'w.due_date', type: 'date', header: 'Due' },
   quantity_ordered: { expr: 'w.quantity_ordered', type: 'number', sortable: false, header: 'Ordered' },
   quantity_received: { expr: 'w.quantity_received', type: 'number', sortable: false, header: 'Received' },
@@ -112,8 +113,12 @@ export async function findTanksForFinish(
 }
 
 /** A customer's own work orders (scoped by the signed-in contact's company). */
-export async function findPortalOrders(customerId: string, conn: Db = defaultDb) {
-  return conn
+/** Where a page of a customer's orders ends (newest first). */
+export type OrderCursor = { createdAt: string; id: string };
+
+/** One page of a customer's own orders, newest first, by key (created at, id); `next` starts the page after. */
+export async function findPortalOrders(customerId: string, before: OrderCursor | null = null, size = 50, conn: Db = defaultDb) {
+  let q = conn
     .selectFrom('work_orders as w')
     .innerJoin('parts as p', 'p.id', 'w.part_id')
     .innerJoin('finishes as f', 'f.id', 'w.finish_id')
@@ -123,6 +128,11 @@ export async function findPortalOrders(customerId: string, conn: Db = defaultDb)
     ])
     .where('w.customer_id', '=', customerId)
     .orderBy('w.created_at', 'desc')
-    .limit(500)
-    .execute();
+    .orderBy('w.id', 'desc')
+    .limit(size + 1);
+  if (before) q = q.where(sql<boolean>`(w.created_at, w.id) < (${before.createdAt}::timestamptz, ${before.id}::uuid)`);
+  const rows = await q.execute();
+  const orders = rows.slice(0, size);
+  const last = orders.at(-1);
+  return { orders, next: rows.length > size && last ? { createdAt: new Date(last.created_at).toISOString(), id: last.id } : null };
 }

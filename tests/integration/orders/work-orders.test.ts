@@ -133,8 +133,8 @@ describe('work-order steps', () => {
 describe('customer scoping and job cost', () => {
   it('a customer sees only its own orders', async () => {
     const id = await order('stem', 'NI-B689-25', 12);
-    expect((await findPortalOrders(cust.id)).map((o) => o.id)).toContain(id);
-    expect((await findPortalOrders(other.id)).map((o) => o.id)).not.toContain(id);
+    expect((await findPortalOrders(cust.id)).orders.map((o) => o.id)).toContain(id);
+    expect((await findPortalOrders(other.id)).orders.map((o) => o.id)).not.toContain(id);
   });
 
   it('costs the runs beside the quote', async () => {

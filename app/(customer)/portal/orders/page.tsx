@@ -3,16 +3,19 @@ import { EmptyState } from '@/components/ui/empty-state';
 import { PageHeader } from '@/components/ui/page-header';
 import { SimpleTable } from '@/components/ui/simple-table';
 import { requirePageUser } from '@/lib/auth/current-user';
+import { KeyPager, readCursor } from '@/components/ui/key-pager';
 import { findPortalOrders } from '@/lib/orders/queries';
 import { STATE_LABELS } from '@/lib/orders/states';
 import { formatDay } from '@/lib/quotes/format';
 
 export const metadata: Metadata = { title: 'Orders' };
 
-export default async function PortalOrdersPage() {
+export default async function PortalOrdersPage({ searchParams }: { searchParams: Promise<{ before?: string }> }) {
   const user = await requirePageUser('portal.use', '/portal/orders');
-  // Scoped by the signed-in contact's own company.
-  const orders = user.customerId ? await findPortalOrders(user.customerId) : [];
+  const cursor = readCursor((await searchParams).before, /^\d{4}-\d{2}-\d{2}T[\d:.]+Z$/, /^[0-9a-f-]{36}$/i);
+  const before = cursor ? { createdAt: cursor[0], id: cursor[1] } : null;
+  // Scoped by the signed-in contact's own company; newest first, fifty a page.
+  const { orders, next } = user.customerId ? await findPortalOrders(user.customerId, before) : { orders: [], next: null };
   return (
     <div className="flex flex-col gap-6">
       <PageHeader title="Orders" description="Your parts in our shop and where they stand." />
@@ -49,6 +52,7 @@ export default async function PortalOrdersPage() {
           { header: 'Due', cell: (o) => formatDay(o.due_date) },
         ]}
       />
+      <KeyPager what="orders" basePath="/portal/orders" onFirstPage={!before} olderHref={next ? `/portal/orders?before=${next.createdAt}~${next.id}` : null} />
     </div>
   );
 }
