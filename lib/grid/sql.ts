@@ -14,6 +14,12 @@ export type GridColumn = {
   /** CSV header; defaults to the column id. Set `csv: false` to leave the column out of the export. */
   header?: string;
   csv?: boolean;
+  /**
+   * A closed set of values (a status): text filters and the quick search are matched against the
+   * set here, and each value found becomes `match(value)`, a plain predicate the planner can
+   * estimate and index, instead of a pattern over the computed expression.
+   */
+  choices?: { values: readonly string[]; match: (value: string) => Expression<SqlBool> };
 };
 
 export type GridColumns = Record<string, GridColumn>;
@@ -103,9 +109,42 @@ export function conditionSql(e: Expression<unknown>, c: GridCondition): RawBuild
   return dateCondition(e, c);
 }
 
+/** The values of a closed set a text condition keeps, as the ILIKE the other columns use would. */
+export function choicesMatching(values: readonly string[], c: TextCondition): string[] {
+  const v = c.value.toLowerCase();
+  const keep = (x: string): boolean => {
+    const t = x.toLowerCase();
+    switch (c.op) {
+      case 'blank':
+        return t === '';
+      case 'notBlank':
+        return t !== '';
+      case 'equals':
+        return t === v;
+      case 'notEqual':
+        return t !== v;
+      case 'contains':
+        return t.includes(v);
+      case 'notContains':
+        return !t.includes(v);
+      case 'startsWith':
+        return t.startsWith(v);
+      case 'endsWith':
+        return t.endsWith(v);
+    }
+  };
+  return values.filter(keep);
+}
+
+function anyOf(choices: NonNullable<GridColumn['choices']>, values: string[]): RawBuilder<SqlBool> {
+  return values.length ? sql<SqlBool>`(${sql.join(values.map((v) => choices.match(v)), sql.raw(' or '))})` : sql<SqlBool>`false`;
+}
+
 function filterSql(columns: GridColumns, f: ColumnFilter): RawBuilder<SqlBool> {
-  const e = columnExpr(columns[f.colId]);
-  const parts = f.conditions.map((c) => conditionSql(e, c));
+  const col = columns[f.colId];
+  const e = columnExpr(col);
+  const choices = col?.choices;
+  const parts = f.conditions.map((c) => (choices && c.kind === 'text' ? anyOf(choices, choicesMatching(choices.values, c)) : conditionSql(e, c)));
   return sql<SqlBool>`(${sql.join(parts, sql.raw(f.join === 'OR' ? ' or ' : ' and '))})`;
 }
 
@@ -115,7 +154,7 @@ function searchSql(columns: GridColumns, words: string[]): RawBuilder<SqlBool> |
   const perWord = words.map((w) => {
     const pattern = `%${escapeLike(w)}%`;
     return sql<SqlBool>`(${sql.join(
-      cols.map((c) => sql`${columnExpr(c)}::text ilike ${pattern}`),
+      cols.map((c) => (c.choices ? anyOf(c.choices, choicesMatching(c.choices.values, { kind: 'text', op: 'contains', value: w })) : sql`${columnExpr(c)}::text ilike ${pattern}`)),
       sql.raw(' or '),
     )})`;
   });

@@ -1,5 +1,5 @@
 import 'server-only';
-import { sql, type Kysely } from 'kysely';
+import { sql, type Kysely, type SqlBool } from 'kysely';
 import { db as defaultDb } from '@/db';
 import type { Database, ProcessStep, QuoteStatus } from '@/db/types';
 import type { GridColumns } from '@/lib/grid/server';
@@ -33,7 +33,22 @@ export const QUOTE_GRID_COLUMNS: GridColumns = {
   number: { expr: 'q.number', type: 'text', searchable: true, header: 'Quote' },
   revision: { expr: 'q.revision', type: 'text', sortable: false, header: 'Revision' },
   customer: { expr: 'c.name', type: 'text', searchable: true, header: 'Customer' },
-  status: { expr: effectiveStatus, type: 'text', searchable: true, header: 'Status' },
+  status: {
+    expr: effectiveStatus,
+    type: 'text',
+    searchable: true,
+    header: 'Status',
+    // Filters compare the stored status (indexed, with statistics) rather than the computed one.
+    choices: {
+      values: ['draft', 'sent', 'accepted', 'declined', 'expired', 'superseded'] satisfies QuoteStatus[],
+      match: (v) =>
+        v === 'expired'
+          ? sql<SqlBool>`(q.status = 'expired' or (q.status = 'sent' and q.expires_at <= now()))`
+          : v === 'sent'
+            ? sql<SqlBool>`(q.status = 'sent' and (q.expires_at is null or q.expires_at > now()))`
+            : sql<SqlBool>`q.status = ${v}`,
+    },
+  },
   total_cents: { expr: 'q.total_cents', type: 'number', header: 'Total (cents)' },
   created_at: { expr: 'q.created_at', type: 'date', header: 'Created' },
   expires_at: { expr: 'q.expires_at', type: 'date', header: 'Valid until' },

@@ -2,7 +2,7 @@ import { sql } from 'kysely';
 import { describe, expect, it } from 'vitest';
 import { csvCell, csvLine, contentDisposition } from '@/lib/grid/csv';
 import { parseGridQuery } from '@/lib/grid/query';
-import { escapeLike, orderSql, whereSql, type GridColumns } from '@/lib/grid/sql';
+import { choicesMatching, escapeLike, orderSql, whereSql, type GridColumns } from '@/lib/grid/sql';
 import { compiler } from './compile';
 
 const COLUMNS: GridColumns = {
@@ -19,6 +19,30 @@ function where(model: unknown, q = '') {
   const cond = whereSql(COLUMNS, query);
   return cond ? cond.compile(compiler) : null;
 }
+
+describe('a column with a closed set of values', () => {
+  const STATES = ['accepted', 'received', 'in_process', 'invoiced'];
+  const cols: GridColumns = { state: { expr: 'w.state', type: 'text', searchable: true, choices: { values: STATES, match: (v) => sql`w.state = ${v}` } } };
+  const info = { state: { type: 'text' as const } };
+  const compiled = (model: unknown, q = '') => whereSql(cols, parseGridQuery(new URLSearchParams({ filter: JSON.stringify(model), q }), info))!.compile(compiler);
+
+  it('keeps the values a text condition would keep, case-insensitively', () => {
+    expect(choicesMatching(STATES, { kind: 'text', op: 'contains', value: 'CE' })).toEqual(['accepted', 'received', 'in_process', 'invoiced']);
+    expect(choicesMatching(STATES, { kind: 'text', op: 'equals', value: 'Invoiced' })).toEqual(['invoiced']);
+    expect(choicesMatching(STATES, { kind: 'text', op: 'notContains', value: 'SS' })).toEqual(['accepted', 'received', 'invoiced']);
+    expect(choicesMatching(STATES, { kind: 'text', op: 'startsWith', value: 'in' })).toEqual(['in_process', 'invoiced']);
+  });
+
+  it('filters and searches by plain comparisons of the stored value, or by nothing when none matches', () => {
+    const c = compiled({ state: { filterType: 'text', type: 'contains', filter: 'in' } });
+    expect(c.sql).toBe('((w.state = $1 or w.state = $2))');
+    expect(c.parameters).toEqual(['in_process', 'invoiced']);
+    expect(compiled({ state: { filterType: 'text', type: 'equals', filter: 'shipped' } }).sql).toBe('(false)');
+    const search = compiled({}, 'recei');
+    expect(search.sql).toBe('(((w.state = $1)))');
+    expect(search.parameters).toEqual(['received']);
+  });
+});
 
 describe('whereSql', () => {
   it('binds every user value as a parameter and escapes LIKE wildcards', () => {
