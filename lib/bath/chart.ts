@@ -30,7 +30,39 @@ export type ChartData = {
   sigmaBasis: string | null;
   limitBasis: LimitBasis;
   warnings: string[];
+  /** Readings in the range, and how many of them `points` holds (fewer when a long range is thinned). */
+  readings: { total: number; shown: number };
 };
+
+/** More readings than this in a range are thinned for the screen (a chart is some 1,000 pixels wide). */
+export const MAX_CHART_POINTS = 1500;
+
+/**
+ * The readings a chart draws when there are more than `max`: every reading a control rule fired on
+ * or outside a specification limit, and of the rest, each period's lowest and highest, so no
+ * excursion disappears. Limits and capability are always worked out from every reading.
+ */
+export function thinForChart<P extends { value: number; rules: string[] }>(points: readonly P[], max: number, outside: (p: P) => boolean): P[] {
+  if (points.length <= max) return [...points];
+  const keep = new Set<number>();
+  points.forEach((p, i) => {
+    if (p.rules.length || outside(p)) keep.add(i);
+  });
+  const buckets = Math.max(1, Math.floor((max - Math.min(keep.size, max / 2)) / 2));
+  const size = points.length / buckets;
+  for (let b = 0; b < buckets; b++) {
+    const from = Math.floor(b * size);
+    const to = Math.min(points.length, Math.floor((b + 1) * size));
+    let lo = from;
+    let hi = from;
+    for (let i = from; i < to; i++) {
+      if (points[i]!.value < points[lo]!.value) lo = i;
+      if (points[i]!.value > points[hi]!.value) hi = i;
+    }
+    if (to > from) keep.add(lo).add(hi);
+  }
+  return [...keep].sort((a, b) => a - b).map((i) => points[i]!);
+}
 
 const DAY_MS = 86_400_000;
 const MAX_SPAN_DAYS = 366 * 10;
@@ -56,6 +88,8 @@ export async function getChartData(
   system: UnitSystem,
   executor: Kysely<Database> = defaultDb,
   basis: LimitBasis = 'all',
+  /** Every reading (the CSV export) rather than the screen's thinned set. */
+  allPoints = false,
 ): Promise<ChartData> {
   const analyte = await executor
     .selectFrom('tank_analytes as a')
@@ -94,13 +128,19 @@ export async function getChartData(
   } else {
     warnings.push('At least two analyses are needed for control limits.');
   }
-  const points = rows.rows.map((r, i) => ({
+  const every = rows.rows.map((r, i) => ({
     t: r.taken_at.toISOString(),
     value: show(r.value),
+    raw: r.value,
     rules: (chart?.points[i]?.rules ?? []).map((id) => RULE_TEXT[id]),
   }));
   const lsl = analyte.lower_spec ?? undefined;
   const usl = analyte.upper_spec ?? undefined;
+  const outsideSpec = (p: { raw: number }) => (lsl !== undefined && p.raw < lsl) || (usl !== undefined && p.raw > usl);
+  const points = (allPoints ? every : thinForChart(every, MAX_CHART_POINTS, outsideSpec)).map(({ t, value, rules }) => ({ t, value, rules }));
+  if (points.length < every.length) {
+    warnings.push(`${every.length.toLocaleString('en-US')} readings in this range: the chart draws ${points.length.toLocaleString('en-US')} of them (every one a rule fired on or outside specification, and each period's highest and lowest); the limits use them all, and the CSV holds every reading.`);
+  }
   const hasSpec = lsl !== undefined || usl !== undefined;
   // Capability of the analyses shown: their mean and within (moving-range) sigma, whatever the limit basis.
   let cap: ReturnType<typeof capabilityFromValues> | null = null;
@@ -127,6 +167,7 @@ export async function getChartData(
     sigmaBasis: chart?.sigmaBasis ?? null,
     limitBasis: useBaseline ? 'baseline' : 'all',
     warnings,
+    readings: { total: every.length, shown: points.length },
   };
 }
 

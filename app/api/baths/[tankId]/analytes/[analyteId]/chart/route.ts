@@ -14,8 +14,9 @@ export const GET = withPermission<{ tankId: string; analyteId: string }>('bath.r
   if (!UUID.test(tankId) || !UUID.test(analyteId)) throw new AppError('NOT_FOUND', 'That analyte does not belong to this tank.');
   const params = new URL(req.url).searchParams;
   const range = parseChartRange(params.get('from'), params.get('to'));
-  const data = await getChartData(tankId, analyteId, range, user.unitSystem, undefined, params.get('limits') === 'baseline' ? 'baseline' : 'all');
-  if (params.get('format') === 'csv') {
+  const csv = params.get('format') === 'csv';
+  const data = await getChartData(tankId, analyteId, range, user.unitSystem, undefined, params.get('limits') === 'baseline' ? 'baseline' : 'all', csv);
+  if (csv) {
     const name = `${data.analyte.tankCode}-${data.analyte.key}-${range.from.toISOString().slice(0, 10)}.csv`;
     return new Response(chartCsv(data), {
       headers: { 'content-type': 'text/csv; charset=utf-8', 'content-disposition': `attachment; filename="${name}"`, 'cache-control': 'no-store' },
