@@ -21,7 +21,7 @@ import { AgGridReact } from 'ag-grid-react';
 import { Button } from '../ui/button';
 import { cx } from '../ui/cx';
 import { FormMessage } from '../ui/form-message';
-import { downloadGridCsv } from './grid-query';
+import { downloadGridCsv, GRID_COUNT_CAP } from './grid-query';
 import { gridTheme } from './grid-theme';
 import { useGridSource } from './use-grid-source';
 
@@ -118,7 +118,7 @@ export function DataGrid<T>({
   }
 
   const status =
-    total === null ? (error ? 'Not loaded' : 'Loading…') : total === 0 ? (view.q ? 'Nothing matches this search' : 'No rows yet') : `${countFormat.format(total)} ${total === 1 ? 'row' : 'rows'}`;
+    total === null ? (error ? 'Not loaded' : 'Loading…') : total === 0 ? (view.q ? 'Nothing matches this search' : 'No rows yet') : total > GRID_COUNT_CAP ? `More than ${countFormat.format(GRID_COUNT_CAP)} rows` : `${countFormat.format(total)} ${total === 1 ? 'row' : 'rows'}`;
 
   return (
     <section aria-label={label} className={cx('flex flex-col gap-2', className)}>

@@ -1,6 +1,7 @@
 // Builds the query string the grid's JSON routes read, and checks what they send back.
 // Contract: GET url?offset=&limit=&sort=field:asc|desc&filter=<json>&q=  →  { rows, total }
 //           GET url?format=csv&sort=&filter=&q=                         →  text/csv
+import { GRID_COUNT_CAP } from '@/lib/grid/query';
 
 export type GridSortItem = { colId: string; sort: 'asc' | 'desc' };
 
@@ -14,6 +15,14 @@ export type GridView = {
 };
 
 export type GridPage<T> = { rows: T[]; total: number };
+
+export { GRID_COUNT_CAP };
+
+/** The grid's last row when it is known: the total, or where a short page ends past the cap; else undefined (more to scroll). */
+export function lastRowOf(total: number, startRow: number, received: number, asked: number): number | undefined {
+  if (total <= GRID_COUNT_CAP) return total;
+  return received < asked ? startRow + received : undefined;
+}
 
 export class GridFetchError extends Error {
   readonly status: number | null;

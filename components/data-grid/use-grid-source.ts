@@ -3,7 +3,7 @@
 import { useCallback, useEffect, useMemo, useRef, useState } from 'react';
 import useSWR, { useSWRConfig } from 'swr';
 import type { GridApi, IDatasource, IGetRowsParams } from 'ag-grid-community';
-import { buildGridUrl, fetchGridPage, type GridPage, type GridSortItem, type GridView } from './grid-query';
+import { buildGridUrl, fetchGridPage, lastRowOf, type GridPage, type GridSortItem, type GridView } from './grid-query';
 
 type Options = { url: string; blockSize: number };
 
@@ -75,7 +75,7 @@ export function useGridSource<T>({ url, blockSize }: Options) {
             }
             setTotal(page.total);
             setError(null);
-            params.successCallback(page.rows, page.total);
+            params.successCallback(page.rows, lastRowOf(page.total, params.startRow, page.rows.length, params.endRow - params.startRow));
           },
           (err: unknown) => fail(err instanceof Error ? err.message : 'The list could not be loaded.'),
         );

@@ -6,6 +6,12 @@ import { AppError } from '@/lib/errors';
 
 export type GridColumnType = 'text' | 'number' | 'date';
 
+/**
+ * Counting stops here: beyond it a grid answer's `total` is GRID_COUNT_CAP + 1 and means "more than
+ * this many" (a count of a busy shop's ten years costs more than the page itself, and no one
+ * scrolls a grid of 50,000 rows to its end: they filter or search).
+ */
+export const GRID_COUNT_CAP = 10_000;
 export const GRID_MAX_LIMIT = 500;
 export const GRID_DEFAULT_LIMIT = 100;
 const MAX_OFFSET = 100_000_000;

@@ -10,15 +10,16 @@ import 'server-only';
 // GROUP BY or DISTINCT (the count reuses its FROM and WHERE); wrap such a query as a subquery:
 // `db.selectFrom(grouped.as('t')).selectAll()` with expressions `t.<col>`.
 import { conditionalJson } from '@/lib/http-etag';
-import type { Expression, SelectQueryBuilder } from 'kysely';
+import type { Expression, Kysely, SelectQueryBuilder } from 'kysely';
+import { db as defaultDb } from '@/db';
 import { sql } from 'kysely';
 import { contentDisposition, csvLine } from './csv';
-import { type GridColumnInfo, type GridQuery, parseGridQuery } from './query';
+import { GRID_COUNT_CAP, type GridColumnInfo, type GridQuery, parseGridQuery } from './query';
 import { type GridColumns, orderSql, whereSql } from './sql';
 
 export type { GridColumn, GridColumns } from './sql';
 export type { GridQuery, GridColumnType } from './query';
-export { parseGridQuery, GRID_MAX_LIMIT } from './query';
+export { parseGridQuery, GRID_COUNT_CAP, GRID_MAX_LIMIT } from './query';
 
 export type GridOptions<O> = {
   columns: GridColumns;
@@ -29,8 +30,12 @@ export type GridOptions<O> = {
   fileName?: string;
   /** Shapes each row after it is read (both JSON and CSV), e.g. to convert units. */
   mapRow?: (row: O) => Record<string, unknown>;
+  /** Where the count runs: the connection or transaction the select was built on (default: the app's). */
+  db?: Kysely<any>;
 };
 
+
+/** `total` is exact up to GRID_COUNT_CAP; GRID_COUNT_CAP + 1 means more. */
 export type GridResult = { rows: Record<string, unknown>[]; total: number };
 
 const CSV_BATCH = 1000;
@@ -61,13 +66,11 @@ export async function runGridQuery<DB, TB extends keyof DB, O>(
   query: GridQuery,
 ): Promise<GridResult> {
   const base = filtered(qb, opts.columns, query);
+  const conn: Kysely<any> = opts.db ?? (defaultDb as Kysely<any>);
+  const upTo = base.clearSelect().clearOrderBy().select(sql<number>`1`.as('one')).limit(GRID_COUNT_CAP + 1);
   const [rows, count] = await Promise.all([
     ordered(base, opts, query).limit(query.limit).offset(query.offset).execute(),
-    base
-      .clearSelect()
-      .clearOrderBy()
-      .select(sql<number>`count(*)::int`.as('total'))
-      .executeTakeFirst() as Promise<{ total: number } | undefined>,
+    conn.selectFrom(upTo.as('counted')).select(sql<number>`count(*)::int`.as('total')).executeTakeFirst() as Promise<{ total: number } | undefined>,
   ]);
   const map = opts.mapRow ?? ((r: O) => r as Record<string, unknown>);
   return { rows: rows.map((r) => map(r as O)), total: count?.total ?? 0 };

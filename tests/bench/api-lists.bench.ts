@@ -65,7 +65,7 @@ async function compiledStatements(e: Endpoint): Promise<{ page: BareStatement; c
     },
     log: (event) => void seen.push(event.query),
   });
-  await runGridQuery(e.select(recorder), e.options, gridQueryFrom(new URL(e.path, 'http://bench.invalid'), e.options.columns));
+  await runGridQuery(e.select(recorder), { ...e.options, db: recorder }, gridQueryFrom(new URL(e.path, 'http://bench.invalid'), e.options.columns));
   const count = seen.filter((q) => /count\(\*\)::int as "total"/.test(q.sql));
   const page = seen.filter((q) => !count.includes(q));
   if (seen.length !== 2 || count.length !== 1) throw new Error(`expected a page and a count statement for ${e.path}, recorded ${seen.length}`);

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { formatMoney } from '@/components/money';
 import { formatUnitValue, UNIT_SPACE, NO_VALUE } from '@/components/unit-value';
-import { buildGridUrl, csvFileName, parseGridPage, sortParam, GridFetchError } from '@/components/data-grid/grid-query';
+import { buildGridUrl, csvFileName, GRID_COUNT_CAP, lastRowOf, parseGridPage, sortParam, GridFetchError } from '@/components/data-grid/grid-query';
 import { findCurrentHref } from '@/components/nav/app-nav';
 import { checkLimits, classifyPoint, preparePoints, yScale } from '@/components/control-chart/chart-model';
 
@@ -73,6 +73,10 @@ describe('grid query', () => {
   });
   it('checks the page shape', () => {
     expect(parseGridPage({ rows: [{ id: 1 }], total: 1 })).toEqual({ rows: [{ id: 1 }], total: 1 });
+    // Up to the server's cap the total is the last row; past it the grid scrolls on until a short block.
+    expect(lastRowOf(420, 0, 100, 100)).toBe(420);
+    expect(lastRowOf(GRID_COUNT_CAP + 1, 0, 100, 100)).toBeUndefined();
+    expect(lastRowOf(GRID_COUNT_CAP + 1, 12_300, 40, 100)).toBe(12_340);
     expect(() => parseGridPage({ rows: 'x', total: 1 })).toThrow(GridFetchError);
     expect(() => parseGridPage({ rows: [], total: -1 })).toThrow(/total/);
     expect(() => parseGridPage(null)).toThrow(GridFetchError);
