@@ -16,13 +16,17 @@ export default async function ShopLayout({ children }: { children: ReactNode }) 
   const items = await resolveNavBadges(navFor(user.role, STAFF_NAV, { demoMode: isDemoMode() }));
   return (
     <div className="min-h-screen md:flex">
-      <AppNav
-        variant="side"
-        items={items}
-        brand={<Brand href="/home" />}
-        footer={<UserMenu user={user} accountHref="/account" />}
-        className="md:sticky md:top-0 md:h-screen md:w-60 md:shrink-0"
-      />
+      {/* The column stretches the whole height of the page (its panel never ends part-way down a
+          long one); the navigation inside it stays in view as the page scrolls. */}
+      <div className="md:w-60 md:shrink-0 md:border-r md:border-surface-line md:bg-surface">
+        <AppNav
+          variant="side"
+          items={items}
+          brand={<Brand href="/home" />}
+          footer={<UserMenu user={user} accountHref="/account" />}
+          className="md:sticky md:top-0 md:h-screen md:w-full"
+        />
+      </div>
       <main className="min-w-0 flex-1 px-4 py-6 md:px-8">{children}</main>
     </div>
   );

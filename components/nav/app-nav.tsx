@@ -74,8 +74,8 @@ export function AppNav({ items, currentPath, label = 'Main', brand, footer, vari
       aria-label={label}
       className={cx(
         'bg-surface',
-        // The side column's height is the caller's (the staff layout pins it to the viewport).
-        isSide ? 'border-b border-surface-line md:flex md:w-56 md:flex-col md:border-r md:border-b-0' : 'border-b border-surface-line md:flex md:items-center md:gap-4 md:px-4',
+        // The side column's width, height and edge are the caller's (the staff layout's column).
+        isSide ? 'border-b border-surface-line md:flex md:flex-col md:border-b-0' : 'border-b border-surface-line md:flex md:items-center md:gap-4 md:px-4',
         className,
       )}
     >
