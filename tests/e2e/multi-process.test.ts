@@ -23,6 +23,7 @@ import { startWorkerProcess, type WorkerProcess } from '../helpers/worker-proces
 import { customerId, makeOrder, OWNER, sessionUser } from '../integration/billing/fixtures';
 import { prepareLoadFixture, rowsWritten, type LoadFixture } from '../load/fixture';
 import { formatReport, resendUnacknowledged, runMix, type LoadReport } from '../load/mix';
+import { until } from '../helpers/until';
 
 const SECOND_PORT = E2E_PORT + 11;
 const REMINDERS = JOB.invoiceReminders;
@@ -53,16 +54,6 @@ afterAll(async () => {
   await second?.stop();
   await db.destroy();
 });
-
-async function until<T>(what: string, probe: () => Promise<T | undefined | false>, timeoutMs = 60_000): Promise<T> {
-  const end = Date.now() + timeoutMs;
-  for (;;) {
-    const value = await probe();
-    if (value) return value;
-    if (Date.now() > end) throw new Error(`timed out waiting for ${what}`);
-    await new Promise((r) => setTimeout(r, 200));
-  }
-}
 
 describe('two app processes and two workers on one database', () => {
   it('a session started on one process is valid on the other', async () => {
@@ -145,7 +136,7 @@ describe('two app processes and two workers on one database', () => {
       await until(`job ${id} to finish`, async () => {
         const job = await boss.getJobById(REMINDERS, id);
         return job?.state === 'completed' || job?.state === 'failed' ? job : undefined;
-      });
+      }, 60_000);
     }
     const runsBy = workers.map((w) => w.lines.filter((l) => l.includes(`${REMINDERS} done`)).length);
     console.log(`reminder runs taken by each worker: ${runsBy.join(' / ')}`);

@@ -18,6 +18,7 @@ import { startTcpProxy, type TcpProxy } from '../../helpers/tcp-proxy';
 import { startWorkerProcess, type WorkerProcess } from '../../helpers/worker-process';
 import { makeTank, removeTank } from '../bath/fixtures';
 import { customerId, makeOrder, OWNER, sessionUser } from '../billing/fixtures';
+import { until } from '../../helpers/until';
 
 const QUEUE = JOB.invoiceReminders;
 // Short settings, so that a dead worker's job expires, is noticed and retried within seconds
@@ -70,16 +71,6 @@ async function overdueInvoice(daysAgo: number, email: string) {
 
 const remindersOf = (invoiceId: string) => db.selectFrom('invoice_reminders').select(['stage', 'sent_to']).where('invoice_id', '=', invoiceId).execute();
 const loggedSends = (address: string) => db.selectFrom('emails').select('status').where('to_address', '=', address).execute();
-
-async function until<T>(what: string, probe: () => Promise<T | undefined | false>, timeoutMs = 30_000): Promise<T> {
-  const end = Date.now() + timeoutMs;
-  for (;;) {
-    const value = await probe();
-    if (value) return value;
-    if (Date.now() > end) throw new Error(`timed out waiting for ${what}`);
-    await new Promise((r) => setTimeout(r, 100));
-  }
-}
 
 const jobState = async (id: string, queue: string = QUEUE) => (await boss.getJobById(queue, id))?.state;
 const completed = (id: string, queue: string = QUEUE) =>
