@@ -1,5 +1,7 @@
 // Hazard tags for bath templates and the caution shown beside each. The wording is ours; every
 // line defers to the safety data sheet, local codes and licensed practice (reference §12).
+import type { CautionKind } from '@/components/ui/caution';
+
 export type Hazard =
   | 'cyanide'
   | 'hexavalent_chromium'
@@ -28,6 +30,25 @@ export const HAZARD_CAUTIONS: Record<Hazard, string> = {
   electrical:
     'Rectifier current is low voltage but very high: bus-bar shorts burn. The mains side can kill: lock out before work, and take off rings and watches.',
 };
+
+/**
+ * A bath template's hazard tags as the app's standard cautions. Nickel and oxidiser have a standard
+ * caution's words too ("nickel"); oxidiser has none and is said in the template's own words.
+ */
+const CAUTION_OF: Partial<Record<Hazard, CautionKind>> = {
+  cyanide: 'cyanide',
+  hexavalent_chromium: 'hexavalent-chromium',
+  strong_acid: 'acid',
+  caustic: 'caustic',
+  hydrogen: 'hydrogen',
+  heat: 'heat',
+  electrical: 'electrical',
+  nickel: 'nickel',
+};
+
+export function cautionKindsOf(hazards: readonly Hazard[]): CautionKind[] {
+  return [...new Set(hazards.map((h) => CAUTION_OF[h]).filter((k): k is CautionKind => !!k))];
+}
 
 export const GENERAL_CAUTION =
   'Defer to the safety data sheet, the customer specification, local codes and licensed practice.';

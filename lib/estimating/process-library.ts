@@ -2,7 +2,8 @@
 // rectifier, bath metal and anodes (lib/quotes/process.ts), and the starting values of a free
 // process for a metal the library does not list. Pure: the caller passes the rows.
 import { PlatingInputError, type JobProcess, type Loading } from '@/lib/plating';
-import { BATH_TEMPLATES } from '@/lib/bath/templates';
+import type { Hazard } from '@/lib/bath/hazards';
+import { BATH_TEMPLATES, getTemplate } from '@/lib/bath/templates';
 import {
   bathMetalGPerL,
   DEFAULT_DRAG_OUT_L_PER_M2,
@@ -40,6 +41,8 @@ export type LibraryProcess = {
   process: JobProcess;
   tankCode: string | null;
   note: string | null;
+  /** The hazards of the bath that runs it (its tank's template), for the workbench's cautions. */
+  bathHazards: Hazard[];
 };
 
 export type FinishFacts = {
@@ -63,11 +66,14 @@ export function libraryProcessFrom(finish: FinishFacts, tanks: readonly TankFact
   const base = finishProcess(finish);
   let tankCode: string | null = null;
   let note: string | null = null;
+  let bathHazards: Hazard[] = [];
   let shop: Omit<JobProcess, keyof typeof base>;
   try {
     const resolved = processForFinish({ element: finish.element, ionCharge: finish.ionCharge, method: finish.method, lineId: finish.lineId }, tanks);
     tankCode = resolved.tankCode;
     shop = resolved.process;
+    const tank = tanks.find((t) => t.id === resolved.tankId);
+    bathHazards = [...(tank ? (getTemplate(tank.templateId)?.hazards ?? []) : [])];
   } catch (e) {
     if (!(e instanceof PlatingInputError)) throw e;
     note = `${e.message} A ${DEFAULT_RECTIFIER_MAX_A} A rectifier is assumed here.`;
@@ -84,7 +90,14 @@ export function libraryProcessFrom(finish: FinishFacts, tanks: readonly TankFact
     process,
     tankCode,
     note,
+    bathHazards,
   };
+}
+
+/** The hazards of the first bath template that deposits this metal: the bath a free process is figured from. */
+export function freeProcessHazards(element: string, charge: number): Hazard[] {
+  const template = BATH_TEMPLATES.find((t) => t.deposit?.element === element && t.deposit.charge === charge && !t.deposit.alloyWith);
+  return [...(template?.hazards ?? [])];
 }
 
 // Chromium is plated on insoluble (lead-alloy) anodes, its metal made up from chromic acid

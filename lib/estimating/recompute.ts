@@ -3,7 +3,9 @@
 // Pure and synchronous.
 import { PLATING_METALS, PlatingInputError, type UnitSystem } from '@/lib/plating';
 import type { CautionKind } from '@/components/ui/caution';
+import { cautionKindsOf, type Hazard } from '@/lib/bath/hazards';
 import { platingCautions } from '@/lib/finishes/hazards';
+import { freeProcessHazards } from './process-library';
 import { bakeFor, safetyNotes, type SafetyNote } from './safety';
 import type { CalculationInput } from './calculation-schema';
 import { computeCalculation, fieldErrorsOf, measureGeometry, type CalculationResult, type GeometryFigures } from './calculation';
@@ -50,7 +52,7 @@ function optionalNumber(text: string): number | null {
   return text.trim() === '' || !Number.isFinite(n) ? null : n;
 }
 
-function cautionsOf(form: WorkbenchForm, finishWords: string): Pick<WorkbenchView, 'safety' | 'bathCautions'> {
+function cautionsOf(form: WorkbenchForm, finish: FinishContext): Pick<WorkbenchView, 'safety' | 'bathCautions'> {
   const metal = PLATING_METALS.find((m) => m.key === form.metalKey);
   if (!metal) return { safety: [], bathCautions: [] };
   let bake = null;
@@ -61,7 +63,9 @@ function cautionsOf(form: WorkbenchForm, finishWords: string): Pick<WorkbenchVie
   }
   const safety = safetyNotes(metal.element, metal.charge, bake);
   const said = new Set<string>(safety.map((n) => n.kind));
-  return { safety, bathCautions: platingCautions(metal.element, metal.charge, finishWords).filter((k) => !said.has(k)) };
+  const fromBath = cautionKindsOf(finish.bathHazards ?? freeProcessHazards(metal.element, metal.charge));
+  const kinds = new Set([...platingCautions(metal.element, metal.charge, finish.words ?? ''), ...fromBath]);
+  return { safety, bathCautions: [...kinds].filter((k) => !said.has(k)) };
 }
 
 function engineErrors(e: unknown, form: WorkbenchForm): FieldErrors {
@@ -71,10 +75,12 @@ function engineErrors(e: unknown, form: WorkbenchForm): FieldErrors {
   return fieldErrorsOf(e, { ...FORM_FIELDS, areaPerPartDm2: geometryKey, areaDm2: geometryKey, volumeCm3: geometryKey }, '_form');
 }
 
-/** `finishWords`: the chosen finish's name and specification ("Alkaline zinc …"), which tell the bath's chemistry. */
-export function recomputeWorkbench(form: WorkbenchForm, system: UnitSystem, finishWords = ''): WorkbenchView {
+/** The chosen finish's name and specification, and its bath's hazards; a free process uses its metal's first bath template. */
+export type FinishContext = { words?: string; bathHazards?: readonly Hazard[] };
+
+export function recomputeWorkbench(form: WorkbenchForm, system: UnitSystem, finish: FinishContext = {}): WorkbenchView {
   const reading = readForm(form, system);
-  const cautions = cautionsOf(form, finishWords);
+  const cautions = cautionsOf(form, finish);
   let geometry: GeometryFigures | null = null;
   let fieldErrors = reading.fieldErrors;
   if (reading.geometry) {

@@ -5,6 +5,7 @@ import { findMetal } from '@/lib/plating';
 import type { CautionKind } from '@/components/ui/caution';
 import type { ProcessFamilyId } from '@/db/types';
 import { getFamily } from '@/lib/families';
+import { cautionKindsOf, type Hazard } from '@/lib/bath/hazards';
 
 export type RouteStep = { step: string; note?: string };
 
@@ -46,6 +47,8 @@ export function finishHazards(finish: {
   bakeRequired: boolean;
   /** The finish's name and specification: "Alkaline zinc …" tells the bath's chemistry. */
   words?: string;
+  /** The hazards of the bath that runs the finish (its tank's template), where known. */
+  bathHazards?: readonly Hazard[];
 }): CautionKind[] {
   const kinds = new Set<CautionKind>();
   const family = getFamily(finish.family);
@@ -55,6 +58,7 @@ export function finishHazards(finish: {
     const words = `${finish.words ?? ''} ${finish.route.map((s) => `${s.step} ${s.note ?? ''}`).join(' ')}`;
     for (const k of platingCautions(finish.element, finish.ionCharge, words)) kinds.add(k);
   }
+  for (const k of cautionKindsOf(finish.bathHazards ?? [])) kinds.add(k);
   const metal = findMetal(finish.element, finish.ionCharge);
   if (metal?.caution && CYANIDE.test(metal.caution)) kinds.add('cyanide');
   if (metal?.element === 'Cr' && metal.charge === 6) kinds.add('hexavalent-chromium');

@@ -3,6 +3,8 @@ import { Document, Image, Page, Text, View, renderToBuffer } from '@react-pdf/re
 import QRCode from 'qrcode';
 import { cautionTexts, SAFETY_DEFERRAL } from '@/components/ui/caution';
 import { appUrl } from '@/lib/email/mailer';
+import type { Hazard } from '@/lib/bath/hazards';
+import { bathHazardsByFinish } from '@/lib/finishes/bath-hazards';
 import { finishHazards } from '@/lib/finishes/hazards';
 import { formatStoredQuantity, type UnitSystem } from '@/lib/plating';
 import { formatDay } from '@/lib/quotes/format';
@@ -27,7 +29,7 @@ function Step({ n, title, note }: { n: number; title: string; note?: string }) {
   );
 }
 
-export function TravelerDocument({ wo, shop, qrPng, units }: { wo: WorkOrderDetail; shop: ShopHeader | null; qrPng: Buffer; units: UnitSystem }) {
+export function TravelerDocument({ wo, shop, qrPng, units, bathHazards }: { wo: WorkOrderDetail; shop: ShopHeader | null; qrPng: Buffer; units: UnitSystem; bathHazards: readonly Hazard[] }) {
   const steps = [
     { title: 'Receive and count parts', note: `Ordered ${wo.quantity_ordered.toLocaleString('en-US')}` },
     ...wo.process_route.map((s) => ({ title: s.step, note: s.note })),
@@ -47,6 +49,7 @@ export function TravelerDocument({ wo, shop, qrPng, units }: { wo: WorkOrderDeta
     route: wo.process_route,
     bakeRequired: false,
     words: `${wo.finish_name} ${wo.spec_text}`,
+    bathHazards,
   }).map((k) => cautionTexts[k]);
   return (
     <Document title={`Traveler ${wo.number}`} creator="Ampwright">
@@ -118,9 +121,10 @@ export function TravelerDocument({ wo, shop, qrPng, units }: { wo: WorkOrderDeta
 
 export async function renderTravelerPdf(wo: WorkOrderDetail, units: UnitSystem): Promise<Buffer> {
   registerPdfFonts();
-  const [shop, qrPng] = await Promise.all([
+  const [shop, qrPng, hazards] = await Promise.all([
     getShopSettings(),
     QRCode.toBuffer(appUrl(`/work-orders/${wo.id}`), { errorCorrectionLevel: 'M', margin: 1, width: 240 }),
+    bathHazardsByFinish([wo.finish_id]),
   ]);
-  return renderToBuffer(<TravelerDocument wo={wo} shop={shop} qrPng={qrPng} units={units} />);
+  return renderToBuffer(<TravelerDocument wo={wo} shop={shop} qrPng={qrPng} units={units} bathHazards={hazards.get(wo.finish_id) ?? []} />);
 }

@@ -2,9 +2,11 @@
 // it (lib/finishes/hazards), and the relief bake where the line's cost includes one. Pure.
 import type { CautionKind } from '@/components/ui/caution';
 import type { ProcessFamilyId, ProcessStep } from '@/db/types';
+import type { Hazard } from '@/lib/bath/hazards';
 import { finishHazards } from '@/lib/finishes/hazards';
 
 type HazardLine = {
+  finishId?: string;
   finishName?: string;
   processRoute: ProcessStep[];
   specText: string;
@@ -12,7 +14,8 @@ type HazardLine = {
   cost: { bake: { applies: boolean } };
 };
 
-export function quoteHazards(lines: readonly HazardLine[]): CautionKind[] {
+/** `bathHazards`: each finish's bath hazards (lib/finishes/bath-hazards.ts), by finish id. */
+export function quoteHazards(lines: readonly HazardLine[], bathHazards: ReadonlyMap<string, readonly Hazard[]> = new Map()): CautionKind[] {
   const kinds = new Set<CautionKind>();
   for (const l of lines) {
     const f = l.calculation.input.finish;
@@ -24,6 +27,7 @@ export function quoteHazards(lines: readonly HazardLine[]): CautionKind[] {
       route: l.processRoute,
       bakeRequired: l.cost.bake.applies,
       words: `${l.finishName ?? ''} ${l.specText}`,
+      bathHazards: l.finishId ? bathHazards.get(l.finishId) : undefined,
     });
     for (const k of found) kinds.add(k);
   }

@@ -63,6 +63,7 @@ export type QuoteLineView = {
   partNumber: string;
   partRevision: string;
   partDescription: string;
+  finishId: string;
   finishCode: string;
   finishName: string;
   specText: string;
@@ -85,7 +86,7 @@ async function linesOf(conn: Db, quoteId: string): Promise<QuoteLineView[]> {
       'l.id', 'l.line_no', 'l.quantity', 'l.pricing_basis', 'l.computed_total_cents', 'l.total_cents', 'l.unit_price_cents',
       'l.override_total_cents', 'l.override_reason', 'l.override_at', 'l.cost', 'l.calculation',
       'p.part_number', 'p.revision as part_revision', 'p.description as part_description',
-      'f.code as finish_code', 'f.name as finish_name', 'f.spec_text', 'f.process_route', 'o.name as override_by_name',
+      'l.finish_id', 'f.code as finish_code', 'f.name as finish_name', 'f.spec_text', 'f.process_route', 'o.name as override_by_name',
     ])
     .where('l.quote_id', '=', quoteId)
     .orderBy('l.line_no')
@@ -98,6 +99,7 @@ async function linesOf(conn: Db, quoteId: string): Promise<QuoteLineView[]> {
     partNumber: r.part_number,
     partRevision: r.part_revision,
     partDescription: r.part_description,
+    finishId: r.finish_id,
     finishCode: r.finish_code,
     finishName: r.finish_name,
     specText: r.spec_text,

@@ -99,15 +99,17 @@ describe('field messages', () => {
     expect(view.result).toBeNull();
     // Source: ASTM B850 Table 1 (39–43 HRC: 14 h), reference §7; silver is plated from cyanide (reference §2).
     expect(view.safety.map((n) => n.kind)).toEqual(['cyanide', 'high-strength-steel-bake']);
-    // Every bath: current and hydrogen (reference §12); cyanide is already said above, so not twice.
-    expect(view.bathCautions).toEqual(['electrical', 'hydrogen']);
-    expect(recomputeWorkbench(metricForm(), 'metric').bathCautions).toEqual(['electrical', 'hydrogen', 'nickel']);
+    // Every bath: current and hydrogen (reference §12); cyanide is already said above, so not twice;
+    // the free silver process is figured from the cyanide silver template, whose free caustic shows.
+    expect(view.bathCautions).toEqual(['electrical', 'hydrogen', 'caustic']);
+    // Watts nickel (the default): nickel salts, and a heated bath.
+    expect(recomputeWorkbench(metricForm(), 'metric').bathCautions).toEqual(['electrical', 'hydrogen', 'nickel', 'heat']);
     // Acid copper sulfate is a strong-acid bath; chromic acid too, with hexavalent chromium said above.
     expect(recomputeWorkbench(metricForm({ metalKey: 'Cu2+' }), 'metric').bathCautions).toContain('acid');
     expect(recomputeWorkbench(metricForm({ metalKey: 'Cr6+' }), 'metric').bathCautions).toEqual(expect.arrayContaining(['acid', 'heat']));
-    // Zinc may be acid or alkaline: the finish's words decide.
-    expect(recomputeWorkbench(metricForm({ metalKey: 'Zn2+' }), 'metric', 'Alkaline zinc, clear trivalent passivate').bathCautions).toContain('caustic');
-    expect(recomputeWorkbench(metricForm({ metalKey: 'Zn2+' }), 'metric').bathCautions).not.toContain('caustic');
+    // Zinc may be acid or alkaline: the bath that runs the finish decides, whatever its name says.
+    expect(recomputeWorkbench(metricForm({ metalKey: 'Zn2+' }), 'metric', { words: 'Zinc, clear trivalent passivate', bathHazards: ['caustic', 'hydrogen', 'electrical'] }).bathCautions).toContain('caustic');
+    expect(recomputeWorkbench(metricForm({ metalKey: 'Zn2+' }), 'metric', { words: 'Zinc, clear trivalent passivate', bathHazards: ['strong_acid', 'electrical'] }).bathCautions).not.toContain('caustic');
   });
 
   it('starts from the same part in either unit system, so the amp-hours do not change with the units', () => {

@@ -40,7 +40,7 @@ export function Workbench({ system, library, initial, initialTitle }: Props) {
   const { view, ms } = useMemo(() => {
     const t0 = performance.now();
     const finish = library.find((l) => l.finishId === form.finishId);
-    const v = recomputeWorkbench(form, system, finish ? `${finish.name} ${finish.specText}` : '');
+    const v = recomputeWorkbench(form, system, finish ? { words: `${finish.name} ${finish.specText}`, bathHazards: finish.bathHazards } : {});
     return { view: v, ms: performance.now() - t0 };
   }, [form, system, library]);
 

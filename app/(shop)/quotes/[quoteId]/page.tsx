@@ -11,6 +11,7 @@ import { FormMessage } from '@/components/ui/form-message';
 import { PageHeader } from '@/components/ui/page-header';
 import { can, requirePageUser } from '@/lib/auth/current-user';
 import { ESTIMATE_CAUTION } from '@/lib/plating';
+import { bathHazardsByFinish } from '@/lib/finishes/bath-hazards';
 import { quoteHazards } from '@/lib/quotes/hazards';
 import { findQuoteChoices, getQuote } from '@/lib/quotes/queries';
 import { canRevise, isEditable, QUOTE_STATUS_LABELS, quoteLabel } from '@/lib/quotes/status';
@@ -37,7 +38,7 @@ export default async function QuotePage({ params, searchParams }: { params: Prom
   const mayWrite = can(user, 'quotes.write');
   const choices = draft && (mayPrice || mayWrite) ? await findQuoteChoices(quote.customer_id) : null;
   const engineNotes = [...new Set(quote.lines.flatMap((l) => l.cost.cautions).filter((c) => c !== ESTIMATE_CAUTION))];
-  const hazards = quoteHazards(quote.lines);
+  const hazards = quoteHazards(quote.lines, await bathHazardsByFinish(quote.lines.map((l) => l.finishId)));
 
   return (
     <div className="flex flex-col gap-5">

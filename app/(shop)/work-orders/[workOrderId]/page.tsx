@@ -6,6 +6,7 @@ import { Badge } from '@/components/ui/badge';
 import { buttonClasses, LinkButton } from '@/components/ui/button';
 import { Card } from '@/components/ui/card';
 import { Caution } from '@/components/ui/caution';
+import { bathHazardsByFinish } from '@/lib/finishes/bath-hazards';
 import { finishHazards } from '@/lib/finishes/hazards';
 import { PageHeader } from '@/components/ui/page-header';
 import { StatusBadge } from '@/components/ui/status-badge';
@@ -32,6 +33,7 @@ export default async function WorkOrderPage({ params }: { params: Promise<{ work
   const user = await requirePageUser('orders.read', `/work-orders/${workOrderId}`);
   const wo = UUID.test(workOrderId) ? await getWorkOrder(workOrderId) : null;
   if (!wo) notFound();
+  const bathHazards = (await bathHazardsByFinish([wo.finish_id])).get(wo.finish_id);
   const [events, runs, cost] = await Promise.all([findWorkOrderEvents(wo.id), findPlatingRuns(wo.id), can(user, 'reports.read') ? getJobCost(wo.id) : null]);
   const next = nextState(wo.state, wo.bake_required);
   const family = getFamily(wo.family);
@@ -135,6 +137,7 @@ export default async function WorkOrderPage({ params }: { params: Promise<{ work
           route: wo.process_route,
           bakeRequired: wo.bake_required,
           words: `${wo.finish_name} ${wo.spec_text}`,
+          bathHazards,
         })}
       />
 
