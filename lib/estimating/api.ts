@@ -43,7 +43,10 @@ const number = () =>
 
 function measured<Q extends Quantity>(quantity: Q) {
   const units = unitsOf(quantity) as [UnitOf<Q>, ...UnitOf<Q>[]];
-  return z.strictObject({ value: number(), unit: z.enum(units) });
+  return z.strictObject(
+    { value: number(), unit: z.enum(units) },
+    { error: (iss) => (iss.code === 'invalid_type' ? `Expected { "value": a number, "unit": one of ${units.join(', ')} }, got ${kindOf(iss.input)}.` : undefined) },
+  );
 }
 
 const ELEMENTS = [...new Set(PLATING_METALS.map((m) => m.element))] as [string, ...string[]];

@@ -87,3 +87,14 @@ describe('POST /api/v1/plating/estimate: results', () => {
     }
   });
 });
+
+describe('POST /api/v1/plating/estimate: a measure that is not an object', () => {
+  it('says what a measure looks like, without echoing an infinite number back', async () => {
+    await signInAs(ESTIMATOR);
+    // 1e999 parses to Infinity: a property run found the message said "received Infinity".
+    const r = await postEstimate(`{"area":1e999,"thickness":{"value":0.01,"unit":"um"},"currentDensity":{"value":0.05,"unit":"A/dm2"},"efficiency":0.05,"element":"Ni","charge":2}`);
+    expect(r.status).toBe(400);
+    expect(r.text).not.toMatch(/NaN|Infinity/);
+    expect(r.json.error.fields.area[0]).toMatch(/^Expected \{ "value": a number, "unit": one of .*dm2.* \}, got a number out of range\.$/);
+  });
+});
