@@ -45,7 +45,13 @@ function measured<Q extends Quantity>(quantity: Q) {
   const units = unitsOf(quantity) as [UnitOf<Q>, ...UnitOf<Q>[]];
   return z.strictObject(
     { value: number(), unit: z.enum(units) },
-    { error: (iss) => (iss.code === 'invalid_type' ? `Expected { "value": a number, "unit": one of ${units.join(', ')} }, got ${kindOf(iss.input)}.` : undefined) },
+    {
+      error: (iss) => {
+        if (iss.code !== 'invalid_type') return undefined;
+        const shape = `{ "value": a number, "unit": one of ${units.join(', ')} }`;
+        return iss.input === undefined ? `Required: ${shape}.` : `Expected ${shape}, got ${kindOf(iss.input)}.`;
+      },
+    },
   );
 }
 

@@ -70,7 +70,7 @@ describe('estimateFromRequest: units in and out', () => {
 
 describe('estimateFromRequest: bad input names the field and the reason', () => {
   it.each([
-    ['no area', { ...nickel(), area: undefined }, 'area', /expected object/],
+    ['no area', { ...nickel(), area: undefined }, 'area', /^Required: \{ "value": a number, "unit": one of dm2, cm2, m2, in2, ft2 \}\.$/],
     ['an unknown unit', nickel({ area: { value: 1, unit: 'acre' as 'dm2' } }), 'area.unit', /Invalid option/],
     ['a negative area', nickel({ area: { value: -1, unit: 'dm2' } }), 'area.value', /greater than 0/],
     ['a string for a number', nickel({ efficiency: '0.9' as unknown as number }), 'efficiency', /Expected a finite number, got text/],
