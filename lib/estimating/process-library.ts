@@ -3,7 +3,7 @@
 // process for a metal the library does not list. Pure: the caller passes the rows.
 import { PlatingInputError, type JobProcess, type Loading } from '@/lib/plating';
 import type { Hazard } from '@/lib/bath/hazards';
-import { BATH_TEMPLATES, getTemplate } from '@/lib/bath/templates';
+import { BATH_TEMPLATES, templateHazards } from '@/lib/bath/templates';
 import {
   bathMetalGPerL,
   DEFAULT_DRAG_OUT_L_PER_M2,
@@ -72,8 +72,7 @@ export function libraryProcessFrom(finish: FinishFacts, tanks: readonly TankFact
     const resolved = processForFinish({ element: finish.element, ionCharge: finish.ionCharge, method: finish.method, lineId: finish.lineId }, tanks);
     tankCode = resolved.tankCode;
     shop = resolved.process;
-    const tank = tanks.find((t) => t.id === resolved.tankId);
-    bathHazards = [...(tank ? (getTemplate(tank.templateId)?.hazards ?? []) : [])];
+    bathHazards = templateHazards(tanks.find((t) => t.id === resolved.tankId)?.templateId);
   } catch (e) {
     if (!(e instanceof PlatingInputError)) throw e;
     note = `${e.message} A ${DEFAULT_RECTIFIER_MAX_A} A rectifier is assumed here.`;
@@ -94,10 +93,14 @@ export function libraryProcessFrom(finish: FinishFacts, tanks: readonly TankFact
   };
 }
 
-/** The hazards of the first bath template that deposits this metal: the bath a free process is figured from. */
+/** The first bath template that deposits this metal (not as an alloy): the bath a free process is figured from. */
+function freeProcessTemplate(element: string, charge: number) {
+  return BATH_TEMPLATES.find((t) => t.deposit?.element === element && t.deposit.charge === charge && !t.deposit.alloyWith);
+}
+
+/** The hazards of that bath. */
 export function freeProcessHazards(element: string, charge: number): Hazard[] {
-  const template = BATH_TEMPLATES.find((t) => t.deposit?.element === element && t.deposit.charge === charge && !t.deposit.alloyWith);
-  return [...(template?.hazards ?? [])];
+  return templateHazards(freeProcessTemplate(element, charge)?.id);
 }
 
 // Chromium is plated on insoluble (lead-alloy) anodes, its metal made up from chromic acid
@@ -120,7 +123,7 @@ function freeShopDefaults(element: string, loading: Loading) {
  * first bath template that deposits it (lib/bath/templates, sources there), else plain defaults.
  */
 export function freeProcessFor(element: string, charge: number, loading: Loading = 'rack'): JobProcess {
-  const template = BATH_TEMPLATES.find((t) => t.deposit?.element === element && t.deposit.charge === charge && !t.deposit.alloyWith);
+  const template = freeProcessTemplate(element, charge);
   const cd = template?.currentDensityAdm2;
   // Without a template, 90 % is only a starting value for the estimator to overwrite (common practice).
   const efficiency = template?.efficiencyPercent ? template.efficiencyPercent.typical / 100 : 0.9;

@@ -6,7 +6,7 @@ import type { Kysely } from 'kysely';
 import { db as defaultDb } from '@/db';
 import type { Database } from '@/db/types';
 import type { Hazard } from '@/lib/bath/hazards';
-import { getTemplate } from '@/lib/bath/templates';
+import { templateHazards } from '@/lib/bath/templates';
 import { activeTankFacts } from '@/lib/quotes/pricing-context';
 import { tanksForFinish } from '@/lib/quotes/process';
 
@@ -19,7 +19,7 @@ export async function bathHazardsByFinish(finishIds: readonly string[], conn: Ky
   ]);
   for (const f of finishes) {
     const tank = tanksForFinish({ family: f.family, familyParams: f.family_params, element: f.element, ionCharge: f.ion_charge, method: f.method, lineId: f.line_id }, tanks)[0];
-    out.set(f.id, tank ? [...(getTemplate(tank.templateId)?.hazards ?? [])] : []);
+    out.set(f.id, templateHazards(tank?.templateId));
   }
   return out;
 }

@@ -54,15 +54,13 @@ export function finishHazards(finish: {
   const family = getFamily(finish.family);
   const params = family.paramsSchema.safeParse(finish.familyParams ?? family.defaultParams);
   for (const k of family.cautions(params.success ? params.data : family.defaultParams)) kinds.add(k);
-  if (family.id === 'electroplating') {
-    const words = `${finish.words ?? ''} ${finish.route.map((s) => `${s.step} ${s.note ?? ''}`).join(' ')}`;
-    for (const k of platingCautions(finish.element, finish.ionCharge, words)) kinds.add(k);
-  }
+  const texts = [finish.words ?? '', ...finish.route.map((s) => `${s.step} ${s.note ?? ''}`)];
+  if (family.id === 'electroplating') for (const k of platingCautions(finish.element, finish.ionCharge, texts.join(' '))) kinds.add(k);
   for (const k of cautionKindsOf(finish.bathHazards ?? [])) kinds.add(k);
   const metal = findMetal(finish.element, finish.ionCharge);
   if (metal?.caution && CYANIDE.test(metal.caution)) kinds.add('cyanide');
   if (metal?.element === 'Cr' && metal.charge === 6) kinds.add('hexavalent-chromium');
-  for (const text of [finish.words ?? '', ...finish.route.map((s) => `${s.step} ${s.note ?? ''}`)]) {
+  for (const text of texts) {
     if (CYANIDE.test(text)) kinds.add('cyanide');
     if (HEXAVALENT.test(text) && !NOT_HEXAVALENT.test(text)) kinds.add('hexavalent-chromium');
   }

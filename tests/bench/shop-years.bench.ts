@@ -17,6 +17,7 @@ import { createPool } from '@/db/pool';
 import { seedDemo } from '@/lib/seed';
 import { alreadyGenerated, generateShopYears } from '@/lib/seed/shop-years';
 import { DEMO_USER_IDS } from '../helpers/sessions';
+import { databaseNamed } from '../helpers/test-db';
 import { BENCH_DIST_DIR, buildApp, ROOT, startNext, type RunningServer } from './next-server';
 import { quantile } from './stats';
 import type { BenchRow } from './types';
@@ -27,12 +28,6 @@ const RUNS = 25;
 const WARM = 5;
 const TARGET = 1.5;
 const MEMORY_TARGET_MB = 64;
-
-function withDb(url: string, name: string): string {
-  const u = new URL(url);
-  u.pathname = `/${name}`;
-  return u.toString();
-}
 
 async function query<T>(url: string, text: string, values: unknown[] = []): Promise<T[]> {
   const c = new pg.Client({ connectionString: url });
@@ -45,9 +40,9 @@ async function query<T>(url: string, text: string, values: unknown[] = []): Prom
 }
 
 async function prepareYears(baseUrl: string): Promise<{ url: string; seconds: number | null }> {
-  const url = withDb(baseUrl, 'ampwright_bench_years');
-  const exists = await query(withDb(baseUrl, 'postgres'), `select 1 from pg_database where datname = 'ampwright_bench_years'`);
-  if (!exists.length) await query(withDb(baseUrl, 'postgres'), 'create database ampwright_bench_years');
+  const url = databaseNamed(baseUrl, 'ampwright_bench_years');
+  const exists = await query(databaseNamed(baseUrl, 'postgres'), `select 1 from pg_database where datname = 'ampwright_bench_years'`);
+  if (!exists.length) await query(databaseNamed(baseUrl, 'postgres'), 'create database ampwright_bench_years');
   const db = createDb(createPool(url));
   try {
     const { error } = await migrateToLatest(db);

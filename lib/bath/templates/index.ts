@@ -1,6 +1,7 @@
 // Bath chemistry templates: the starting point a shop copies for a new tank. Values are typical
 // (reference §2–3 with their sources, or marked "from memory"); the supplier's data sheet governs.
 import { TEMPLATE_NOTE, type BathTemplate } from './types';
+import type { Hazard } from '../hazards';
 import { FAMILIES } from '@/lib/families';
 import { getMethod } from '../methods';
 
@@ -11,6 +12,11 @@ export const BATH_TEMPLATES: readonly BathTemplate[] = FAMILIES.flatMap((f) => f
 
 export function getTemplate(id: string): BathTemplate | null {
   return BATH_TEMPLATES.find((t) => t.id === id) ?? null;
+}
+
+/** A template's hazard tags (a copy); none for an unknown or absent template. */
+export function templateHazards(id: string | null | undefined): Hazard[] {
+  return [...((id ? getTemplate(id)?.hazards : undefined) ?? [])];
 }
 
 /** Consistency problems in a template (also used when a supervisor edits a copy). */

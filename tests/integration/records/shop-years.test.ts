@@ -7,21 +7,15 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { createDb } from '@/db/kysely';
 import { createPool } from '@/db/pool';
 import { generateShopYears, type ShopYearsCounts } from '@/lib/seed/shop-years';
-import { prepareTestDatabase, TEST_DATABASE_URL } from '../../helpers/test-db';
+import { databaseNamed, prepareTestDatabase, TEST_DATABASE_URL } from '../../helpers/test-db';
 
 const SCALE = 0.002;
 const Y = new Date().getUTCFullYear(); // the history fills the ten years before this one
 const names = ['ampwright_years_a', 'ampwright_years_b'];
-const urlOf = (name: string) => {
-  const u = new URL(TEST_DATABASE_URL);
-  u.pathname = `/${name}`;
-  return u.toString();
-};
+const urlOf = (name: string) => databaseNamed(TEST_DATABASE_URL, name);
 
 async function admin(statement: string): Promise<void> {
-  const u = new URL(TEST_DATABASE_URL);
-  u.pathname = '/postgres';
-  const c = new pg.Client({ connectionString: u.toString() });
+  const c = new pg.Client({ connectionString: urlOf('postgres') });
   await c.connect();
   try {
     await c.query(statement);
