@@ -4,8 +4,8 @@ import { SimpleTable } from '@/components/ui/simple-table';
 import { displayUnit, fromStorage, type UnitSystem } from '@/lib/plating';
 import { formatValue } from '@/lib/estimating/format';
 import type { CalculationSummary } from '@/lib/estimating/queries';
+import { formatDateTime } from '@/lib/quotes/format';
 
-const WHEN = new Intl.DateTimeFormat('en-GB', { dateStyle: 'medium', timeStyle: 'short', timeZone: 'UTC' });
 
 export function RecentCalculations({ rows, system }: { rows: CalculationSummary[]; system: UnitSystem }) {
   const area = displayUnit('area', system);
@@ -27,7 +27,7 @@ export function RecentCalculations({ rows, system }: { rows: CalculationSummary[
         { header: 'Metal', cell: (r) => r.metalName ?? '—' },
         { header: 'Quantity', numeric: true, cell: (r) => r.quantity ?? '—' },
         { header: 'Area per part', numeric: true, cell: (r) => formatValue(fromStorage(r.areaDm2, area), area) },
-        { header: 'Saved', cell: (r) => `${WHEN.format(r.createdAt)} UTC${r.createdBy ? ` · ${r.createdBy}` : ''}` },
+        { header: 'Saved', cell: (r) => `${formatDateTime(r.createdAt)}${r.createdBy ? ` · ${r.createdBy}` : ''}` },
       ]}
     />
   );

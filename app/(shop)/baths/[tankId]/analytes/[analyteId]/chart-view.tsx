@@ -7,6 +7,7 @@ import { SelectField, TextField } from '@/components/ui/field';
 import { FormMessage } from '@/components/ui/form-message';
 import { Spinner } from '@/components/ui/spinner';
 import type { ChartData } from '@/lib/bath/chart';
+import { shopTimeZone } from '@/lib/quality/shop-time';
 
 const DAY_MS = 86_400_000;
 const day = (d: Date) => d.toISOString().slice(0, 10);
@@ -104,7 +105,7 @@ export function ChartView({ tankId, analyteId }: { tankId: string; analyteId: st
           <p className="text-xs text-ink-muted">
             Control limits are worked out from {data.limitBasis === 'baseline' ? 'the first 30 analyses shown' : 'all analyses shown'} (individuals chart, σ from the
             average moving range{data.sigmaBasis ? `; ${data.sigmaBasis}` : ''}); they are not the bath sheet&apos;s control range. Rules: Western Electric run rules.
-            Times in UTC.
+            Times in the shop&apos;s zone ({shopTimeZone()}).
           </p>
           {data.warnings.map((w) => <FormMessage key={w} tone="info" message={w} />)}
         </>
