@@ -1,5 +1,6 @@
 // Builds the query string the grid's JSON routes read, and checks what they send back.
-// Contract: GET url?offset=&limit=&sort=field:asc|desc&filter=<json>&q=  →  { rows, total }
+// Contract: GET url?offset=&limit=&sort=field:asc|desc&filter=<json>&q=[&after=]  →  { rows, total, next }
+//           (`after` is the `next` of the page before: the server then seeks by key, not by offset)
 //           GET url?format=csv&sort=&filter=&q=                         →  text/csv
 import { GRID_COUNT_CAP } from '@/lib/grid/query';
 
@@ -14,7 +15,8 @@ export type GridView = {
   q?: string;
 };
 
-export type GridPage<T> = { rows: T[]; total: number };
+/** `next` is the cursor of the page's last row (null after a short page, or from a route that pages by offset only). */
+export type GridPage<T> = { rows: T[]; total: number; next: string | null };
 
 export { GRID_COUNT_CAP };
 
@@ -47,11 +49,11 @@ const PLACEHOLDER_ORIGIN = 'http://grid.invalid';
 export function buildGridUrl(
   url: string,
   view: GridView,
-  page: { offset: number; limit: number } | { format: 'csv' },
+  page: { offset: number; limit: number; after?: string | null } | { format: 'csv' },
 ): string {
   const target = new URL(url, PLACEHOLDER_ORIGIN);
   const params = target.searchParams;
-  for (const key of ['offset', 'limit', 'sort', 'filter', 'q', 'format']) params.delete(key);
+  for (const key of ['offset', 'limit', 'after', 'sort', 'filter', 'q', 'format']) params.delete(key);
   if ('format' in page) {
     params.set('format', page.format);
   } else {
@@ -59,6 +61,7 @@ export function buildGridUrl(
     if (!Number.isInteger(page.limit) || page.limit < 1) throw new RangeError(`limit must be a whole number ≥ 1; got ${page.limit}.`);
     params.set('offset', String(page.offset));
     params.set('limit', String(page.limit));
+    if (page.after) params.set('after', page.after);
   }
   const sort = sortParam(view.sort);
   if (sort) params.set('sort', sort);
@@ -72,12 +75,12 @@ export function buildGridUrl(
 /** Checks a page's shape so a wrong route fails with a message rather than a blank grid. */
 export function parseGridPage<T>(body: unknown): GridPage<T> {
   if (typeof body !== 'object' || body === null) throw new GridFetchError('The list answered with something other than JSON data.');
-  const { rows, total } = body as { rows?: unknown; total?: unknown };
+  const { rows, total, next } = body as { rows?: unknown; total?: unknown; next?: unknown };
   if (!Array.isArray(rows)) throw new GridFetchError('The list answered without a "rows" array.');
   if (typeof total !== 'number' || !Number.isInteger(total) || total < 0) {
     throw new GridFetchError('The list answered without a whole-number "total".');
   }
-  return { rows: rows as T[], total };
+  return { rows: rows as T[], total, next: typeof next === 'string' && next !== '' ? next : null };
 }
 
 /** The house error body is `{ error: { code, message } }`; fall back to the status text. */

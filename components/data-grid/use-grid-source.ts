@@ -29,6 +29,9 @@ export function useGridSource<T>({ url, blockSize }: Options) {
   const served = useRef(new WeakSet<GridPage<T>>());
   // A first block SWR fetched by itself (focus, mutate) that the next getRows should use as is.
   const fresh = useRef<{ key: string; page: GridPage<T> } | null>(null);
+  // Where each block after a loaded one starts by key ("view|startRow" → the server's cursor), so
+  // scrolling down seeks instead of counting offsets. Only for the view it was made in.
+  const cursors = useRef(new Map<string, string>());
 
   const firstKey = buildGridUrl(url, view, { offset: 0, limit: blockSize });
   const { data: watched } = useSWR<GridPage<T>>(firstKey, fetchGridPage<T>, {
@@ -54,8 +57,13 @@ export function useGridSource<T>({ url, blockSize }: Options) {
           filter: (params.filterModel as Record<string, unknown> | null) ?? null,
           q: qRef.current,
         };
-        const key = buildGridUrl(url, current, { offset: params.startRow, limit: params.endRow - params.startRow });
+        const viewKey = buildGridUrl(url, current, { format: 'csv' });
         const isFirst = params.startRow === 0;
+        // A new view, or a refresh from the top, starts over: a cursor from before could skip a row
+        // that moved up into the block before it. Until the next block's cursor arrives, offset.
+        if (isFirst) cursors.current.clear();
+        const after = isFirst ? null : (cursors.current.get(`${viewKey}|${params.startRow}`) ?? null);
+        const key = buildGridUrl(url, current, { offset: params.startRow, limit: params.endRow - params.startRow, after });
         const cached = isFirst && fresh.current?.key === key ? fresh.current.page : null;
         if (isFirst) fresh.current = null;
         const load: Promise<GridPage<T> | undefined> = cached
@@ -73,6 +81,7 @@ export function useGridSource<T>({ url, blockSize }: Options) {
               // Only now, with the page in SWR's cache: a watched key without data would fetch again.
               setView((old) => (sameView(url, old, current) ? old : current));
             }
+            if (page.next) cursors.current.set(`${viewKey}|${params.startRow + page.rows.length}`, page.next);
             setTotal(page.total);
             setError(null);
             params.successCallback(page.rows, lastRowOf(page.total, params.startRow, page.rows.length, params.endRow - params.startRow));

@@ -34,6 +34,12 @@ export type ColumnFilter = { colId: string; join: 'AND' | 'OR'; conditions: Grid
 
 export type GridQuery = {
   offset: number;
+  /**
+   * Where the page starts by key: the `next` cursor of the page before it (opaque to the client).
+   * When set, `offset` is only the grid's row number and the database seeks instead of counting
+   * its way down, so a deep page costs what the first one does.
+   */
+  after: GridCursor | null;
   limit: number;
   sort: { colId: string; dir: 'asc' | 'desc' } | null;
   filters: ColumnFilter[];
@@ -41,6 +47,37 @@ export type GridQuery = {
   words: string[];
   format: 'json' | 'csv';
 };
+
+/** The last row of a page: its sort column and direction, that column's value as text (null when empty) and the unique key as text. */
+export type GridCursor = { colId: string | null; dir: 'asc' | 'desc'; value: string | null; key: string };
+
+const MAX_CURSOR_CHARS = 2_000;
+const cursorSchema = z.object({
+  c: z.string().max(64).nullable(),
+  d: z.enum(['asc', 'desc']),
+  v: z.string().max(1_000).nullable(),
+  k: z.string().min(1).max(200),
+});
+
+export function encodeCursor(c: GridCursor): string {
+  return Buffer.from(JSON.stringify({ c: c.colId, d: c.dir, v: c.value, k: c.key }), 'utf8').toString('base64url');
+}
+
+function parseCursor(text: string | null, sort: GridQuery['sort']): GridCursor | null {
+  if (text === null || text === '') return null;
+  if (text.length > MAX_CURSOR_CHARS || !/^[A-Za-z0-9_-]+$/.test(text)) bad('after is not a page cursor this list gave out.');
+  let raw: unknown;
+  try {
+    raw = JSON.parse(Buffer.from(text, 'base64url').toString('utf8'));
+  } catch {
+    bad('after is not a page cursor this list gave out.');
+  }
+  const r = cursorSchema.safeParse(raw);
+  if (!r.success) bad('after is not a page cursor this list gave out.');
+  // A cursor only means something in the order it was made in; the default order is checked by the server.
+  if (sort && (r.data.c !== sort.colId || r.data.d !== sort.dir)) bad('after belongs to another sort order; ask for the page by offset.');
+  return { colId: r.data.c, dir: r.data.d, value: r.data.v, key: r.data.k };
+}
 
 /** What the parser needs to know of each column: its type, and whether it may be sorted. */
 export type GridColumnInfo = { type: GridColumnType; sortable?: boolean };
@@ -175,11 +212,13 @@ export function parseGridQuery(params: URLSearchParams, columns: Record<string, 
   const page = pageSchema.safeParse({ offset: get('offset'), limit: get('limit'), format: get('format'), q: get('q') });
   if (!page.success) bad(page.error.issues[0]?.message ?? 'The list request is not valid.');
   const words = page.data.q.trim().split(/\s+/).filter(Boolean).slice(0, 8);
+  const sort = parseSort(params.get('sort'), columns);
   return {
     offset: page.data.offset,
+    after: parseCursor(params.get('after'), sort),
     limit: page.data.limit,
     format: page.data.format,
-    sort: parseSort(params.get('sort'), columns),
+    sort,
     filters: parseFilter(params.get('filter'), columns),
     words,
   };

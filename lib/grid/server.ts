@@ -10,14 +10,15 @@ import 'server-only';
 // GROUP BY or DISTINCT (the count reuses its FROM and WHERE); wrap such a query as a subquery:
 // `db.selectFrom(grouped.as('t')).selectAll()` with expressions `t.<col>`.
 import { conditionalJson } from '@/lib/http-etag';
+import { AppError } from '@/lib/errors';
 import type { Expression, Kysely, SelectQueryBuilder } from 'kysely';
 import { db as defaultDb } from '@/db';
 import { sql } from 'kysely';
 import { contentDisposition, csvLine } from './csv';
-import { GRID_COUNT_CAP, type GridColumnInfo, type GridQuery, parseGridQuery } from './query';
-import { type GridColumns, orderSql, whereSql } from './sql';
+import { encodeCursor, GRID_COUNT_CAP, type GridColumnInfo, type GridCursor, type GridQuery, parseGridQuery } from './query';
+import { afterSql, columnExpr, type GridColumns, type GridSearch, orderSql, whereSql } from './sql';
 
-export type { GridColumn, GridColumns } from './sql';
+export type { GridColumn, GridColumns, GridSearch } from './sql';
 export type { GridQuery, GridColumnType } from './query';
 export { parseGridQuery, GRID_COUNT_CAP, GRID_MAX_LIMIT } from './query';
 
@@ -32,11 +33,15 @@ export type GridOptions<O> = {
   mapRow?: (row: O) => Record<string, unknown>;
   /** Where the count runs: the connection or transaction the select was built on (default: the app's). */
   db?: Kysely<any>;
+  /** The list's own quick search for one word (see GridSearch), when its searchable columns span tables. */
+  search?: GridSearch;
 };
 
-
-/** `total` is exact up to GRID_COUNT_CAP; GRID_COUNT_CAP + 1 means more. */
-export type GridResult = { rows: Record<string, unknown>[]; total: number };
+/**
+ * `total` is exact up to GRID_COUNT_CAP; GRID_COUNT_CAP + 1 means more. `next` is the cursor of the
+ * page's last row, to ask for the page after it by key (`after=`); null after a short page.
+ */
+export type GridResult = { rows: Record<string, unknown>[]; total: number; next: string | null };
 
 const CSV_BATCH = 1000;
 
@@ -44,13 +49,53 @@ function columnInfo(columns: GridColumns): Record<string, GridColumnInfo> {
   return Object.fromEntries(Object.entries(columns).map(([id, c]) => [id, { type: c.type, sortable: c.sortable }]));
 }
 
-function filtered<DB, TB extends keyof DB, O>(qb: SelectQueryBuilder<DB, TB, O>, columns: GridColumns, query: GridQuery) {
-  const where = whereSql(columns, query);
+function filtered<DB, TB extends keyof DB, O>(qb: SelectQueryBuilder<DB, TB, O>, opts: GridOptions<O>, query: GridQuery) {
+  const where = whereSql(opts.columns, query, opts.search);
   return where ? qb.where(where) : qb;
 }
 
 function ordered<DB, TB extends keyof DB, O>(qb: SelectQueryBuilder<DB, TB, O>, opts: GridOptions<O>, query: GridQuery) {
   return orderSql(opts.columns, query.sort, opts.defaultSort ?? null, opts.key).reduce((q, term) => q.orderBy(term), qb);
+}
+
+const SORT_TEXT = '__grid_sort';
+const KEY_TEXT = '__grid_key';
+type Keyed = { [SORT_TEXT]?: string | null; [KEY_TEXT]?: string };
+
+/**
+ * The query's order as a cursor's frame, and a select that also reads each row's sort value and key
+ * as text (exact: a timestamp keeps its microseconds, a numeric its digits) for the next cursor.
+ */
+function keyed<DB, TB extends keyof DB, O>(qb: SelectQueryBuilder<DB, TB, O>, opts: GridOptions<O>, query: GridQuery) {
+  const chosen = query.sort ?? opts.defaultSort ?? null;
+  const frame = { colId: chosen?.colId ?? null, dir: chosen?.dir ?? ('asc' as const) };
+  if (query.after && (query.after.colId !== frame.colId || query.after.dir !== frame.dir)) {
+    throw new AppError('BAD_INPUT', 'after belongs to another sort order; ask for the page by offset.');
+  }
+  const key = typeof opts.key === 'string' ? sql.ref(opts.key) : sql`(${opts.key})`;
+  const sortText = chosen ? sql<string | null>`(${columnExpr(opts.columns[chosen.colId])})::text` : sql<null>`null`;
+  const select = qb.select([sortText.as(SORT_TEXT), sql<string>`(${key})::text`.as(KEY_TEXT)]) as unknown as SelectQueryBuilder<DB, TB, O & Keyed>;
+  return { frame, select };
+}
+
+function cursorOf(frame: { colId: string | null; dir: 'asc' | 'desc' }, row: Keyed): GridCursor {
+  return { ...frame, value: row[SORT_TEXT] ?? null, key: String(row[KEY_TEXT]) };
+}
+
+function withoutKeys<O>(row: O & Keyed): O {
+  const { [SORT_TEXT]: _s, [KEY_TEXT]: _k, ...rest } = row;
+  return rest as O;
+}
+
+/** One page: the rows after the cursor (reading its ranges in turn until the page is full), or from the offset when there is none. */
+async function readPage<DB, TB extends keyof DB, O>(sorted: SelectQueryBuilder<DB, TB, O>, opts: GridOptions<O>, after: GridCursor | null, offset: number, limit: number): Promise<O[]> {
+  if (!after) return sorted.offset(offset).limit(limit).execute();
+  const rows: O[] = [];
+  for (const range of afterSql(opts.columns, after, opts.key)) {
+    rows.push(...(await sorted.where(range).limit(limit - rows.length).execute()));
+    if (rows.length >= limit) break;
+  }
+  return rows;
 }
 
 /** Parses the request's query string against the options' whitelist (AppError BAD_INPUT on anything wrong). */
@@ -65,15 +110,21 @@ export async function runGridQuery<DB, TB extends keyof DB, O>(
   opts: GridOptions<O>,
   query: GridQuery,
 ): Promise<GridResult> {
-  const base = filtered(qb, opts.columns, query);
+  const base = filtered(qb, opts, query);
   const conn: Kysely<any> = opts.db ?? (defaultDb as Kysely<any>);
   const upTo = base.clearSelect().clearOrderBy().select(sql<number>`1`.as('one')).limit(GRID_COUNT_CAP + 1);
+  const { frame, select } = keyed(base, opts, query);
   const [rows, count] = await Promise.all([
-    ordered(base, opts, query).limit(query.limit).offset(query.offset).execute(),
+    readPage(ordered(select, opts, query), opts, query.after, query.offset, query.limit),
     conn.selectFrom(upTo.as('counted')).select(sql<number>`count(*)::int`.as('total')).executeTakeFirst() as Promise<{ total: number } | undefined>,
   ]);
   const map = opts.mapRow ?? ((r: O) => r as Record<string, unknown>);
-  return { rows: rows.map((r) => map(r as O)), total: count?.total ?? 0 };
+  const last = rows.at(-1) as (O & Keyed) | undefined;
+  return {
+    rows: rows.map((r) => map(withoutKeys(r as O & Keyed))),
+    total: count?.total ?? 0,
+    next: last && rows.length === query.limit ? encodeCursor(cursorOf(frame, last)) : null,
+  };
 }
 
 /** The filtered, sorted rows as CSV, read in batches so a large export never sits in memory at once. */
@@ -83,10 +134,12 @@ export function gridCsvStream<DB, TB extends keyof DB, O>(
   query: GridQuery,
 ): ReadableStream<Uint8Array> {
   const exported = Object.entries(opts.columns).filter(([, c]) => c.csv !== false);
-  const sorted = ordered(filtered(qb, opts.columns, query), opts, query);
+  // Batches follow one another by key, so the thousandth batch costs what the first does.
+  const { frame, select } = keyed(filtered(qb, opts, { ...query, after: null }), opts, { ...query, after: null });
+  const sorted = ordered(select, opts, query);
   const map = opts.mapRow ?? ((r: O) => r as Record<string, unknown>);
   const encoder = new TextEncoder();
-  let offset = 0;
+  let after: GridCursor | null = null;
   let headerSent = false;
   return new ReadableStream<Uint8Array>({
     async pull(controller) {
@@ -96,11 +149,12 @@ export function gridCsvStream<DB, TB extends keyof DB, O>(
         return;
       }
       try {
-        const batch = await sorted.limit(CSV_BATCH).offset(offset).execute();
-        offset += batch.length;
+        const batch = await readPage(sorted, opts, after, 0, CSV_BATCH);
+        const last = batch.at(-1) as (O & Keyed) | undefined;
+        if (last) after = cursorOf(frame, last);
         if (batch.length > 0) {
           const text = batch.map((r) => {
-            const row = map(r as O);
+            const row = map(withoutKeys(r as O & Keyed));
             return csvLine(exported.map(([id]) => row[id]));
           });
           controller.enqueue(encoder.encode(text.join('')));

@@ -1,7 +1,7 @@
 // Turns a parsed grid query into SQL fragments over a column whitelist. Only whitelisted
 // expressions ever reach the SQL; every value the client sends is a bound parameter.
 import { type Expression, type RawBuilder, type SqlBool, sql } from 'kysely';
-import type { ColumnFilter, DateCondition, GridColumnType, GridCondition, GridQuery, NumberCondition, TextCondition } from './query';
+import type { ColumnFilter, DateCondition, GridColumnType, GridCondition, GridCursor, GridQuery, NumberCondition, TextCondition } from './query';
 
 export type GridColumn = {
   /** A column reference ('customers.name') or any SQL expression. */
@@ -148,11 +148,19 @@ function filterSql(columns: GridColumns, f: ColumnFilter): RawBuilder<SqlBool> {
   return sql<SqlBool>`(${sql.join(parts, sql.raw(f.join === 'OR' ? ' or ' : ' and '))})`;
 }
 
-function searchSql(columns: GridColumns, words: string[]): RawBuilder<SqlBool> | null {
+/**
+ * A list's own quick search for one word, given the ILIKE pattern '%word%': used instead of the OR
+ * over its searchable columns when that OR spans joined tables (which no index can serve), e.g. as
+ * `key in (…one indexed select per table…)`. It must match exactly the rows the OR would.
+ */
+export type GridSearch = (pattern: string) => Expression<SqlBool>;
+
+function searchSql(columns: GridColumns, words: string[], search?: GridSearch): RawBuilder<SqlBool> | null {
   const cols = Object.values(columns).filter((c) => c.searchable);
   if (cols.length === 0 || words.length === 0) return null;
   const perWord = words.map((w) => {
     const pattern = `%${escapeLike(w)}%`;
+    if (search) return sql<SqlBool>`(${search(pattern)})`;
     return sql<SqlBool>`(${sql.join(
       cols.map((c) => (c.choices ? anyOf(c.choices, choicesMatching(c.choices.values, { kind: 'text', op: 'contains', value: w })) : sql`${columnExpr(c)}::text ilike ${pattern}`)),
       sql.raw(' or '),
@@ -162,9 +170,9 @@ function searchSql(columns: GridColumns, words: string[]): RawBuilder<SqlBool> |
 }
 
 /** The WHERE condition for the query's filters and quick search, or null when there is none. */
-export function whereSql(columns: GridColumns, query: Pick<GridQuery, 'filters' | 'words'>): RawBuilder<SqlBool> | null {
+export function whereSql(columns: GridColumns, query: Pick<GridQuery, 'filters' | 'words'>, custom?: GridSearch): RawBuilder<SqlBool> | null {
   const parts = query.filters.map((f) => filterSql(columns, f));
-  const search = searchSql(columns, query.words);
+  const search = searchSql(columns, query.words, custom);
   if (search) parts.push(search);
   return parts.length ? sql<SqlBool>`${sql.join(parts, sql.raw(' and '))}` : null;
 }
@@ -186,4 +194,26 @@ export function orderSql(
   if (chosen) terms.push(sql`${columnExpr(columns[chosen.colId])} ${sql.raw(chosen.dir)}`);
   terms.push(sql`${keyExpr} ${sql.raw(chosen?.dir ?? 'asc')}`);
   return terms;
+}
+
+/**
+ * The rows after a cursor in the order orderSql gives, as conditions to read one after another
+ * until the page is full: (sort value, key) past the cursor's, then, where PostgreSQL puts empty
+ * values (last going up, first going down), those. Each is a plain range an index on the sort
+ * column can start at (an OR with "is null" would make the planner read from the top). The sort
+ * value is bound untyped, so it takes the column's own type.
+ */
+export function afterSql(columns: GridColumns, cursor: GridCursor, key: string | Expression<unknown>): RawBuilder<SqlBool>[] {
+  const k = typeof key === 'string' ? sql.ref(key) : sql`(${key})`;
+  if (cursor.colId === null) return [sql<SqlBool>`${k} ${sql.raw(cursor.dir === 'asc' ? '>' : '<')} ${cursor.key}`];
+  const e = columnExpr(columns[cursor.colId]);
+  const v = cursor.value;
+  if (cursor.dir === 'asc') {
+    return v === null
+      ? [sql<SqlBool>`(${e} is null and ${k} > ${cursor.key})`]
+      : [sql<SqlBool>`(${e} >= ${v} and (${e} > ${v} or ${k} > ${cursor.key}))`, sql<SqlBool>`${e} is null`];
+  }
+  return v === null
+    ? [sql<SqlBool>`(${e} is null and ${k} < ${cursor.key})`, sql<SqlBool>`${e} is not null`]
+    : [sql<SqlBool>`(${e} <= ${v} and (${e} < ${v} or ${k} < ${cursor.key}))`];
 }

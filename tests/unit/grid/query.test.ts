@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { AppError } from '@/lib/errors';
-import { GRID_MAX_LIMIT, parseGridQuery, type GridColumnInfo } from '@/lib/grid/query';
+import { encodeCursor, GRID_MAX_LIMIT, parseGridQuery, type GridColumnInfo } from '@/lib/grid/query';
 import { buildGridUrl } from '@/components/data-grid/grid-query';
 
 const COLUMNS: Record<string, GridColumnInfo> = {
@@ -28,7 +28,25 @@ function refusal(qs: string): string {
 
 describe('parseGridQuery', () => {
   it('defaults to the first 100 rows as JSON, unsorted, unfiltered', () => {
-    expect(parse('')).toEqual({ offset: 0, limit: 100, sort: null, filters: [], words: [], format: 'json' });
+    expect(parse('')).toEqual({ offset: 0, after: null, limit: 100, sort: null, filters: [], words: [], format: 'json' });
+  });
+
+  it('reads back a page cursor it gave out, in the sort order it was made for', () => {
+    const after = encodeCursor({ colId: 'name', dir: 'desc', value: 'Brightline Fasteners', key: 'c0ffee00-0000-4000-8000-000000000001' });
+    const url = buildGridUrl('/api/customers', { sort: [{ colId: 'name', sort: 'desc' }] }, { offset: 200, limit: 100, after });
+    expect(parse(url.split('?')[1]!).after).toEqual({ colId: 'name', dir: 'desc', value: 'Brightline Fasteners', key: 'c0ffee00-0000-4000-8000-000000000001' });
+    // An empty sort value (sorted by a column that can be blank) survives as null.
+    const blank = encodeCursor({ colId: null, dir: 'asc', value: null, key: '7' });
+    expect(parse(`after=${blank}`).after).toEqual({ colId: null, dir: 'asc', value: null, key: '7' });
+  });
+
+  it('refuses a cursor that was not made by the list or belongs to another order', () => {
+    const after = encodeCursor({ colId: 'name', dir: 'desc', value: 'x', key: 'k' });
+    expect(refusal(`sort=name:asc&after=${after}`)).toBe('after belongs to another sort order; ask for the page by offset.');
+    expect(refusal('after=not%20base64!')).toBe('after is not a page cursor this list gave out.');
+    expect(refusal(`after=${Buffer.from('{"c":1}').toString('base64url')}`)).toBe('after is not a page cursor this list gave out.');
+    expect(refusal(`after=${Buffer.from('[').toString('base64url')}`)).toBe('after is not a page cursor this list gave out.');
+    expect(refusal(`after=${'A'.repeat(3000)}`)).toBe('after is not a page cursor this list gave out.');
   });
 
   it('reads what the grid client builds', () => {
