@@ -1,7 +1,7 @@
 // GET /api/work-orders — the work-order list for the grid (JSON page or CSV); staff with orders.read
 import { gridResponse } from '@/lib/grid/server';
 import { withPermission } from '@/lib/http';
-import { WORK_ORDER_GRID_COLUMNS, workOrderGridSelect } from '@/lib/orders/queries';
+import { WORK_ORDER_GRID_COLUMNS, workOrderGridSelect, workOrderSearch } from '@/lib/orders/queries';
 
 export const GET = withPermission('orders.read', (req) =>
   gridResponse(req, workOrderGridSelect(), {
@@ -10,5 +10,6 @@ export const GET = withPermission('orders.read', (req) =>
     key: 'w.number',
     defaultSort: { colId: 'number', dir: 'desc' },
     fileName: 'work-orders',
+    search: workOrderSearch,
   }),
 );

@@ -3,7 +3,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { db, type Database } from '@/db';
 import { GRID_COUNT_CAP, gridQueryFrom, runGridQuery } from '@/lib/grid/server';
 import { orderSql, whereSql } from '@/lib/grid/sql';
-import { WORK_ORDER_GRID_COLUMNS, workOrderGridSelect } from '@/lib/orders/queries';
+import { WORK_ORDER_GRID_COLUMNS, workOrderGridSelect, workOrderSearch } from '@/lib/orders/queries';
 import { inRolledBackTransaction } from '../records/helpers';
 import { finishId, makeCustomer, type TestCustomer } from '../quotes/fixtures';
 
@@ -86,6 +86,39 @@ describe('the work-order list with 100,000 orders', () => {
       // W2988-001200 … W2988-001299: 100 orders.
       expect(search.page.total).toBe(100);
       expect(search.ms).toBeLessThan(SEARCH_BUDGET_MS);
+
+      // The list's own search looks the number up in its trigram index instead of reading every order.
+      const searched = gridQueryFrom(new URL('http://x/api/work-orders?limit=100&q=W2988-0012'), WORK_ORDER_GRID_COLUMNS);
+      const built = workOrderGridSelect(q).where(whereSql(WORK_ORDER_GRID_COLUMNS, searched, workOrderSearch)!).orderBy('w.number', 'desc').limit(100).compile();
+      const plan2 = (await q.executeQuery<{ 'QUERY PLAN': string }>(CompiledQuery.raw(`explain (analyze, costs off) ${built.sql}`, [...built.parameters]))).rows.map((x) => x['QUERY PLAN']).join('\n');
+      expect(plan2).toMatch(/Bitmap Index Scan on work_orders_number_trgm/);
+      const indexed = await runGridQuery(workOrderGridSelect(q), { ...OPTS, db: q, search: workOrderSearch }, searched);
+      expect(indexed.rows.map((r) => r.number)).toEqual(search.page.rows.map((r) => r.number));
     });
   }, 240_000);
+
+  it("finds by its own search exactly the orders the search over every column finds", async () => {
+    const [some] = await db
+      .selectFrom('work_orders as w')
+      .innerJoin('parts as p', 'p.id', 'w.part_id')
+      .innerJoin('customers as c', 'c.id', 'w.customer_id')
+      .select(['w.number', 'w.po_number', 'p.part_number', 'c.name'])
+      .orderBy('w.number')
+      .limit(1)
+      .execute();
+    const words = [
+      some!.number, some!.number.slice(-3), some!.po_number, some!.part_number, some!.part_number.slice(1, 5), some!.name.split(' ')[0]!,
+      `${some!.name.split(' ')[0]} ${some!.part_number}`, 'zz-no-such-thing', '%', '_', 'a',
+    ];
+    for (const w of words) {
+      const query = gridQueryFrom(new URL(`http://x/api/work-orders?limit=500&q=${encodeURIComponent(w)}`), WORK_ORDER_GRID_COLUMNS);
+      const [every, own] = await Promise.all([
+        runGridQuery(workOrderGridSelect(), OPTS, query),
+        runGridQuery(workOrderGridSelect(), { ...OPTS, search: workOrderSearch }, query),
+      ]);
+      expect(own.rows.map((r) => r.number), w).toEqual(every.rows.map((r) => r.number));
+      expect(own.total, w).toBe(every.total);
+      if (words.indexOf(w) < 6) expect(every.total, w).toBeGreaterThan(0);
+    }
+  });
 });
