@@ -1,15 +1,30 @@
 import { LinkButton } from './button';
 
 /**
- * Newest-first pages by key: "Newest" back to the top once the reader has gone down, and "Older"
- * while there is more. `olderHref` is null on the last page.
+ * Pages by key: a way back to the top once the reader has gone down ("Newest …"), and on to the
+ * next page while there is more ("Older …"); lists in another order name their own ends.
+ * `olderHref` is null on the last page.
  */
-export function KeyPager({ basePath, olderHref, onFirstPage, what }: { basePath: string; olderHref: string | null; onFirstPage: boolean; what: string }) {
+export function KeyPager({
+  basePath,
+  olderHref,
+  onFirstPage,
+  what,
+  firstLabel = 'Newest',
+  moreLabel = 'Older',
+}: {
+  basePath: string;
+  olderHref: string | null;
+  onFirstPage: boolean;
+  what: string;
+  firstLabel?: string;
+  moreLabel?: string;
+}) {
   if (onFirstPage && !olderHref) return null;
   return (
     <nav aria-label={`More ${what}`} className="flex flex-wrap items-center justify-between gap-3">
-      {onFirstPage ? <span /> : <LinkButton variant="ghost" href={basePath}>Newest {what}</LinkButton>}
-      {olderHref ? <LinkButton variant="secondary" href={olderHref}>Older {what}</LinkButton> : null}
+      {onFirstPage ? <span /> : <LinkButton variant="ghost" href={basePath}>{firstLabel} {what}</LinkButton>}
+      {olderHref ? <LinkButton variant="secondary" href={olderHref}>{moreLabel} {what}</LinkButton> : null}
     </nav>
   );
 }

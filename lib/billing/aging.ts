@@ -36,7 +36,7 @@ export type BucketTotals = Record<AgingBucket, number>;
 export type CustomerAging = { customerId: string; customerName: string; totals: BucketTotals; totalCents: number };
 export type AgingReport = { asOf: string; invoices: AgedInvoice[]; totals: BucketTotals; totalCents: number; customers: CustomerAging[] };
 
-const emptyTotals = (): BucketTotals => ({ current: 0, days_1_30: 0, days_31_60: 0, days_61_90: 0, over_90: 0 });
+export const emptyBucketTotals = (): BucketTotals => ({ current: 0, days_1_30: 0, days_31_60: 0, days_61_90: 0, over_90: 0 });
 
 /** Invoices with nothing open (paid, credited, overpaid) are left out. */
 export function ageReceivables(invoices: readonly AgingInput[], asOf: string): AgingReport {
@@ -47,13 +47,13 @@ export function ageReceivables(invoices: readonly AgingInput[], asOf: string): A
       return { ...i, daysPastDue, bucket: agingBucket(daysPastDue) };
     })
     .sort((a, b) => b.daysPastDue - a.daysPastDue || a.number.localeCompare(b.number));
-  const totals = emptyTotals();
+  const totals = emptyBucketTotals();
   const byCustomer = new Map<string, CustomerAging>();
   for (const i of aged) {
     totals[i.bucket] += i.openCents;
     let c = byCustomer.get(i.customerId);
     if (!c) {
-      c = { customerId: i.customerId, customerName: i.customerName, totals: emptyTotals(), totalCents: 0 };
+      c = { customerId: i.customerId, customerName: i.customerName, totals: emptyBucketTotals(), totalCents: 0 };
       byCustomer.set(i.customerId, c);
     }
     c.totals[i.bucket] += i.openCents;

@@ -3,8 +3,8 @@ import { sql, type Kysely } from 'kysely';
 import { db as defaultDb } from '@/db';
 import type { Database, InvoiceStatus } from '@/db/types';
 import { openBalanceCents } from './arithmetic';
-import { ageReceivables, type AgingReport } from './aging';
-import { isoDate, todayIso } from './dates';
+import { type AgedInvoice, type AgingBucket, agingBucket, type AgingReport, type CustomerAging, emptyBucketTotals } from './aging';
+import { daysBetweenIso, isoDate, todayIso } from './dates';
 import { isUuid } from './orders';
 
 // Reading invoices. Staff read any invoice; the customer area passes its own customer id as the
@@ -161,34 +161,97 @@ export async function findReminders(invoiceId: string, database: Kysely<Database
 /** What an overpaid invoice (alias "i") holds beyond its balance: its part of the customer's credit on account. */
 export const invoiceExcessSql = sql<number>`(i.paid_cents + i.credited_cents - i.total_cents)`;
 
-export type ReceivablesReport = AgingReport & { credits: { customerId: string; customerName: string; creditCents: number }[]; creditCents: number };
+export type CustomerCredit = { customerId: string; customerName: string; creditCents: number };
 
-/** The aging of what is owed, beside each customer's credit on account (overpayments not yet refunded or applied). */
-export async function receivablesReport(asOf: string = todayIso(), database: Kysely<Database> = defaultDb): Promise<ReceivablesReport> {
-  const [rows, creditRows] = await Promise.all([
-    summaryQuery(database).where('i.status', 'in', ['issued', 'partly_paid']).execute(),
+/** Each customer's credit on account (overpayments not yet refunded or applied), by name, and their sum. */
+export async function creditsOnAccount(database: Kysely<Database> = defaultDb): Promise<{ credits: CustomerCredit[]; creditCents: number }> {
+  const rows = await database
+    .selectFrom('invoices as i')
+    .innerJoin('customers as c', 'c.id', 'i.customer_id')
+    .select(['i.customer_id', 'c.name', sql<number>`sum(${invoiceExcessSql})::bigint`.as('credit')])
+    .where('i.status', '=', 'overpaid')
+    .groupBy(['i.customer_id', 'c.name'])
+    .orderBy('c.name')
+    .execute();
+  const credits = rows.map((r) => ({ customerId: r.customer_id, customerName: r.name, creditCents: Number(r.credit) }));
+  return { credits, creditCents: credits.reduce((t, c) => t + c.creditCents, 0) };
+}
+
+/** Open invoices a page at a time, most overdue first; the page after one starts past its last (due date, number). */
+export type ReceivablesCursor = { dueOn: string; number: string };
+export const RECEIVABLES_PAGE_SIZE = 100;
+
+export type ReceivablesReport = AgingReport & {
+  /** Every open invoice, of which `invoices` is one page. */
+  invoiceCount: number;
+  next: ReceivablesCursor | null;
+  credits: CustomerCredit[];
+  creditCents: number;
+};
+
+const openCentsSql = sql<number>`(i.total_cents - i.credited_cents - i.paid_cents)`;
+
+/**
+ * The aging of what is owed, beside each customer's credit on account. Totals by customer and
+ * bucket are summed in SQL over every open invoice (buckets as agingBucket draws them); the list
+ * of invoices is one page, by key, so ten years of a shop's invoices cost what a few do.
+ */
+export async function receivablesReport(
+  asOf: string = todayIso(),
+  database: Kysely<Database> = defaultDb,
+  page: { after?: ReceivablesCursor | null; size?: number } = {},
+): Promise<ReceivablesReport> {
+  const size = page.size ?? RECEIVABLES_PAGE_SIZE;
+  const days = sql<number>`(${asOf}::date - i.due_on)`;
+  const bucket = sql<AgingBucket>`case when ${days} <= 0 then 'current' when ${days} <= 30 then 'days_1_30' when ${days} <= 60 then 'days_31_60' when ${days} <= 90 then 'days_61_90' else 'over_90' end`;
+  let list = summaryQuery(database)
+    .where('i.status', 'in', ['issued', 'partly_paid'])
+    .where(sql<boolean>`${openCentsSql} > 0`)
+    .orderBy('i.due_on')
+    .orderBy('i.number')
+    .limit(size + 1);
+  if (page.after) list = list.where(sql<boolean>`(i.due_on, i.number) > (${page.after.dueOn}::date, ${page.after.number})`);
+  const [grouped, rows, credit] = await Promise.all([
     database
       .selectFrom('invoices as i')
       .innerJoin('customers as c', 'c.id', 'i.customer_id')
-      .select(['i.customer_id', 'c.name', sql<number>`sum(${invoiceExcessSql})::bigint`.as('credit')])
-      .where('i.status', '=', 'overpaid')
-      .groupBy(['i.customer_id', 'c.name'])
-      .orderBy('c.name')
+      .select(['i.customer_id', 'c.name', bucket.as('bucket'), sql<string>`sum(${openCentsSql})::bigint`.as('open'), sql<number>`count(*)::int`.as('n')])
+      .where('i.status', 'in', ['issued', 'partly_paid'])
+      .where(sql<boolean>`${openCentsSql} > 0`)
+      .groupBy(['i.customer_id', 'c.name', sql`3`])
       .execute(),
+    list.execute(),
+    creditsOnAccount(database),
   ]);
-  const credits = creditRows.map((r) => ({ customerId: r.customer_id, customerName: r.name, creditCents: Number(r.credit) }));
-  const aging = ageReceivables(
-    rows.map((r) => toSummary(r, asOf)).map((s) => ({
-      invoiceId: s.id,
-      number: s.number,
-      customerId: s.customerId,
-      customerName: s.customerName,
-      dueOn: s.dueOn,
-      openCents: s.openCents,
-    })),
+  const totals = emptyBucketTotals();
+  const byCustomer = new Map<string, CustomerAging>();
+  let invoiceCount = 0;
+  for (const g of grouped) {
+    const cents = Number(g.open);
+    invoiceCount += g.n;
+    totals[g.bucket] += cents;
+    let c = byCustomer.get(g.customer_id);
+    if (!c) byCustomer.set(g.customer_id, (c = { customerId: g.customer_id, customerName: g.name, totals: emptyBucketTotals(), totalCents: 0 }));
+    c.totals[g.bucket] += cents;
+    c.totalCents += cents;
+  }
+  const customers = [...byCustomer.values()].sort((a, b) => b.totalCents - a.totalCents || a.customerName.localeCompare(b.customerName));
+  const invoices: AgedInvoice[] = rows.slice(0, size).map((r) => {
+    const s = toSummary(r, asOf);
+    const daysPastDue = daysBetweenIso(s.dueOn, asOf);
+    return { invoiceId: s.id, number: s.number, customerId: s.customerId, customerName: s.customerName, dueOn: s.dueOn, openCents: s.openCents, daysPastDue, bucket: agingBucket(daysPastDue) };
+  });
+  const last = invoices.at(-1);
+  return {
     asOf,
-  );
-  return { ...aging, credits, creditCents: credits.reduce((t, c) => t + c.creditCents, 0) };
+    invoices,
+    invoiceCount,
+    next: rows.length > size && last ? { dueOn: last.dueOn, number: last.number } : null,
+    totals,
+    totalCents: customers.reduce((t, c) => t + c.totalCents, 0),
+    customers,
+    ...credit,
+  };
 }
 
 /** The shop's own name and address, printed on invoices (settings key 'shop'). */

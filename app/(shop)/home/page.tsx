@@ -6,7 +6,7 @@ import type { Role } from '@/db/types';
 import { formatMoney } from '@/components/money';
 import { can, requirePageUser } from '@/lib/auth/current-user';
 import { countOpenExceptions } from '@/lib/billing/exceptions';
-import { receivablesReport } from '@/lib/billing/queries';
+import { creditsOnAccount } from '@/lib/billing/queries';
 import { ROLE_LABELS } from '@/lib/auth/roles';
 import { isDemoMode } from '@/lib/email/mailbox';
 import { navFor, STAFF_NAV } from '@/lib/nav';
@@ -22,7 +22,7 @@ const FOCUS: Record<Exclude<Role, 'customer'>, string> = {
 
 /** The owner's money to look at: payment exceptions and customers' credit on account. */
 async function MoneyToCheck() {
-  const [exceptions, receivables] = await Promise.all([countOpenExceptions(), receivablesReport()]);
+  const [exceptions, receivables] = await Promise.all([countOpenExceptions(), creditsOnAccount()]);
   if (exceptions.count === 0 && receivables.creditCents === 0) return null;
   return (
     <div className="grid gap-4 sm:grid-cols-2" role="region" aria-label="Money to check">

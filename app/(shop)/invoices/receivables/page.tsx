@@ -2,6 +2,7 @@ import type { Metadata } from 'next';
 import Link from 'next/link';
 import { formatMoney, Money } from '@/components/money';
 import { Card } from '@/components/ui/card';
+import { KeyPager, readCursor } from '@/components/ui/key-pager';
 import { EmptyState } from '@/components/ui/empty-state';
 import { PageHeader } from '@/components/ui/page-header';
 import { Table, TBody, Td, TFoot, Th, THead, Tr } from '@/components/ui/table';
@@ -26,9 +27,12 @@ function BucketCells({ totals }: { totals: BucketTotals }) {
   );
 }
 
-export default async function ReceivablesPage() {
+export default async function ReceivablesPage({ searchParams }: { searchParams: Promise<Record<string, string | string[] | undefined>> }) {
   const user = await requirePageUser('invoices.read', '/invoices/receivables');
-  const report = await receivablesReport();
+  const cursor = readCursor((await searchParams).after, /^\d{4}-\d{2}-\d{2}$/, /^[A-Za-z0-9-]{1,40}$/);
+  const after = cursor ? { dueOn: cursor[0], number: cursor[1] } : null;
+  const report = await receivablesReport(undefined, undefined, { after });
+  const shown = report.invoices.length;
   return (
     <div className="flex flex-col gap-4">
       <PageHeader
@@ -99,7 +103,11 @@ export default async function ReceivablesPage() {
               </TFoot>
             </Table>
           </Card>
-          <Card title="Open invoices" padding="none">
+          <Card
+            title="Open invoices"
+            description={`${report.invoiceCount.toLocaleString('en-US')} open, most overdue first${report.invoiceCount > shown ? `; ${shown} on this page` : ''}.`}
+            padding="none"
+          >
             <Table caption="Open invoices, most overdue first" captionHidden dense>
               <THead>
                 <tr>
@@ -129,6 +137,14 @@ export default async function ReceivablesPage() {
               </TBody>
             </Table>
           </Card>
+          <KeyPager
+            what="open invoices"
+            firstLabel="Most overdue"
+            moreLabel="Next"
+            basePath="/invoices/receivables"
+            onFirstPage={!after}
+            olderHref={report.next ? `/invoices/receivables?after=${report.next.dueOn}~${encodeURIComponent(report.next.number)}` : null}
+          />
         </>
       )}
     </div>
