@@ -72,7 +72,10 @@ describe('grid query', () => {
     expect(() => buildGridUrl('/a', {}, { offset: 0, limit: 0 })).toThrow(RangeError);
   });
   it('checks the page shape', () => {
-    expect(parseGridPage({ rows: [{ id: 1 }], total: 1 })).toEqual({ rows: [{ id: 1 }], total: 1 });
+    expect(parseGridPage({ rows: [{ id: 1 }], total: 1 })).toEqual({ rows: [{ id: 1 }], total: 1, next: null });
+    expect(parseGridPage({ rows: [{ id: 1 }], total: 1, next: 'eyJ9' })).toEqual({ rows: [{ id: 1 }], total: 1, next: 'eyJ9' });
+    // Anything but a cursor string means "no page after by key": the grid asks by offset.
+    expect(parseGridPage({ rows: [], total: 0, next: 12 }).next).toBeNull();
     // Up to the server's cap the total is the last row; past it the grid scrolls on until a short block.
     expect(lastRowOf(420, 0, 100, 100)).toBe(420);
     expect(lastRowOf(GRID_COUNT_CAP + 1, 0, 100, 100)).toBeUndefined();
