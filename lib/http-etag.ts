@@ -26,7 +26,11 @@ export function matches(ifNoneMatch: string | null, etag: string): boolean {
 
 /** 200 with the JSON and its ETag, or 304 when the reader already holds exactly these bytes. */
 export function conditionalJson(req: Request, data: unknown, init: { status?: number; headers?: Record<string, string> } = {}): Response {
-  const body = JSON.stringify(data);
+  return conditionalJsonText(req, JSON.stringify(data), init);
+}
+
+/** The same, for JSON already serialised (e.g. kept in the database). */
+export function conditionalJsonText(req: Request, body: string, init: { status?: number; headers?: Record<string, string> } = {}): Response {
   const etag = etagFor(body);
   const headers = { ...init.headers, etag, 'cache-control': CONDITIONAL_CACHE_CONTROL, vary: 'cookie' };
   if (matches(req.headers.get('if-none-match'), etag)) return new Response(null, { status: 304, headers });

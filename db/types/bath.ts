@@ -31,6 +31,17 @@ export type TankAnalytesTable = {
   is_active: Generated<boolean>;
   created_at: Timestamp;
   updated_at: Timestamp;
+  /** Counts changes to the analyte's analyses (a trigger); chart_cache entries are kept under it. */
+  analyses_version: Generated<string>;
+};
+
+/** A control chart's JSON, worked out once per change of its analyte (lib/bath/chart-cache.ts). */
+export type ChartCacheTable = {
+  analyte_id: string;
+  view: string;
+  version: string;
+  body: string;
+  created_at: Generated<Date>;
 };
 
 export type AnalyteLimitChangesTable = {
@@ -138,6 +149,7 @@ export type BathAlertEmailsTable = {
 
 export type BathTables = {
   tank_analytes: TankAnalytesTable;
+  chart_cache: ChartCacheTable;
   analyte_limit_changes: AnalyteLimitChangesTable;
   analyses: AnalysesTable;
   additions: AdditionsTable;

@@ -1,12 +1,14 @@
 // GET /api/baths/<tankId>/analytes/<analyteId>/chart?from&to[&limits=baseline][&format=csv] — staff who may read
 // bath records (bath.read): the analyte's individuals chart data, in the reader's units.
 import { chartCsv, getChartData, parseChartRange } from '@/lib/bath/chart';
+import { chartJson } from '@/lib/bath/chart-cache';
 import { AppError } from '@/lib/errors';
 import { withPermission } from '@/lib/http';
-import { conditionalJson } from '@/lib/http-etag';
+import { conditionalJsonText } from '@/lib/http-etag';
 
 export const dynamic = 'force-dynamic';
 
+const DAY = /^\d{4}-\d{2}-\d{2}$/;
 const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
 
 export const GET = withPermission<{ tankId: string; analyteId: string }>('bath.read', async (req, user, ctx) => {
@@ -14,13 +16,18 @@ export const GET = withPermission<{ tankId: string; analyteId: string }>('bath.r
   if (!UUID.test(tankId) || !UUID.test(analyteId)) throw new AppError('NOT_FOUND', 'That analyte does not belong to this tank.');
   const params = new URL(req.url).searchParams;
   const range = parseChartRange(params.get('from'), params.get('to'));
-  const csv = params.get('format') === 'csv';
-  const data = await getChartData(tankId, analyteId, range, user.unitSystem, undefined, params.get('limits') === 'baseline' ? 'baseline' : 'all', csv);
-  if (csv) {
-    const name = `${data.analyte.tankCode}-${data.analyte.key}-${range.from.toISOString().slice(0, 10)}.csv`;
-    return new Response(chartCsv(data), {
-      headers: { 'content-type': 'text/csv; charset=utf-8', 'content-disposition': `attachment; filename="${name}"`, 'cache-control': 'no-store' },
-    });
+  const basis = params.get('limits') === 'baseline' ? 'baseline' : 'all';
+  if (params.get('format') !== 'csv') {
+    // A range of whole days (what the chart screen asks for) is stored once per change of its
+    // analyte (lib/bath/chart-cache.ts); any other range is worked out each time.
+    const days = [params.get('from'), params.get('to')].every((d) => d !== null && DAY.test(d));
+    if (days) return conditionalJsonText(req, await chartJson(tankId, analyteId, range, user.unitSystem, basis));
+    return conditionalJsonText(req, JSON.stringify(await getChartData(tankId, analyteId, range, user.unitSystem, undefined, basis)));
   }
-  return conditionalJson(req, data);
+  // The CSV holds every reading.
+  const data = await getChartData(tankId, analyteId, range, user.unitSystem, undefined, basis, true);
+  const name = `${data.analyte.tankCode}-${data.analyte.key}-${range.from.toISOString().slice(0, 10)}.csv`;
+  return new Response(chartCsv(data), {
+    headers: { 'content-type': 'text/csv; charset=utf-8', 'content-disposition': `attachment; filename="${name}"`, 'cache-control': 'no-store' },
+  });
 });
