@@ -18,7 +18,7 @@ export function Table({ caption, captionHidden, dense, className, children, ...r
     <div className="overflow-x-auto">
       <table
         data-dense={dense || undefined}
-        className={cx('group/table w-full border-collapse text-left text-sm tabular', className)}
+        className={cx('w-full border-collapse text-left text-sm tabular', className)}
         {...rest}
       >
         {caption ? (
@@ -53,19 +53,15 @@ type CellOptions = {
   numeric?: boolean;
 };
 
-const cellPad = 'px-3 py-2 group-data-[dense]/table:px-2 group-data-[dense]/table:py-1';
+// Cell styles are named classes (app/globals.css: .cell, .cell-head, .cell-num, tighter in a dense
+// table): a long list repeats one short name per cell instead of a dozen utilities, in the HTML and
+// again in the page's React payload. Utilities passed in className still win over them.
 
 // No text-transform: units are case-sensitive (g/L is not G/L).
 export function Th({ numeric, className, scope = 'col', ...rest }: ComponentPropsWithoutRef<'th'> & CellOptions) {
-  return (
-    <th
-      scope={scope}
-      className={cx(cellPad, 'text-xs font-semibold text-ink-muted', numeric && 'text-right', className)}
-      {...rest}
-    />
-  );
+  return <th scope={scope} className={cx('cell-head', numeric && 'text-right', className)} {...rest} />;
 }
 
 export function Td({ numeric, className, ...rest }: ComponentPropsWithoutRef<'td'> & CellOptions) {
-  return <td className={cx(cellPad, 'align-top text-ink', numeric && 'text-right whitespace-nowrap', className)} {...rest} />;
+  return <td className={cx('cell', numeric && 'cell-num', className)} {...rest} />;
 }

@@ -82,7 +82,7 @@ export async function findInvoices(scope: InvoiceScope, filter: InvoiceFilter = 
 
 /** Where a page of a customer's invoices ends: the next page starts after this one (newest first). */
 export type InvoiceCursor = { issuedOn: string; number: string };
-export const PORTAL_PAGE_SIZE = 50;
+export const PORTAL_PAGE_SIZE = 25;
 
 /**
  * One page of a customer's invoices, newest first, by key (issued on, number) so that the tenth
@@ -179,7 +179,7 @@ export async function creditsOnAccount(database: Kysely<Database> = defaultDb): 
 
 /** Open invoices a page at a time, most overdue first; the page after one starts past its last (due date, number). */
 export type ReceivablesCursor = { dueOn: string; number: string };
-export const RECEIVABLES_PAGE_SIZE = 100;
+export const RECEIVABLES_PAGE_SIZE = 50;
 
 export type ReceivablesReport = AgingReport & {
   /** Every open invoice, of which `invoices` is one page. */

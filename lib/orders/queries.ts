@@ -49,6 +49,9 @@ export const WORK_ORDER_GRID_COLUMNS: GridColumns = {
   is_rush: { expr: sql`case when w.is_rush then 'rush' else '' end`, type: 'text', sortable: false, csv: true, header: 'Rush' },
 };
 
+/** Orders a page in the customer's portal. */
+export const PORTAL_ORDERS_PAGE_SIZE = 25;
+
 /**
  * The work-order list's quick search for one word: the same rows as the OR over its searchable
  * columns (number, customer, part, PO), found as one indexed select per table (trigram indexes) so
@@ -127,7 +130,7 @@ export async function findTanksForFinish(
 export type OrderCursor = { createdAt: string; id: string };
 
 /** One page of a customer's own orders, newest first, by key (created at, id); `next` starts the page after. */
-export async function findPortalOrders(customerId: string, before: OrderCursor | null = null, size = 50, conn: Db = defaultDb) {
+export async function findPortalOrders(customerId: string, before: OrderCursor | null = null, size = PORTAL_ORDERS_PAGE_SIZE, conn: Db = defaultDb) {
   let q = conn
     .selectFrom('work_orders as w')
     .innerJoin('parts as p', 'p.id', 'w.part_id')

@@ -14,7 +14,7 @@ export default async function PortalOrdersPage({ searchParams }: { searchParams:
   const user = await requirePageUser('portal.use', '/portal/orders');
   const cursor = readCursor((await searchParams).before, /^\d{4}-\d{2}-\d{2}T[\d:.]+Z$/, /^[0-9a-f-]{36}$/i);
   const before = cursor ? { createdAt: cursor[0], id: cursor[1] } : null;
-  // Scoped by the signed-in contact's own company; newest first, fifty a page.
+  // Scoped by the signed-in contact's own company; newest first, 25 a page.
   const { orders, next } = user.customerId ? await findPortalOrders(user.customerId, before) : { orders: [], next: null };
   return (
     <div className="flex flex-col gap-6">

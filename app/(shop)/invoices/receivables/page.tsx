@@ -15,6 +15,15 @@ import { LINK } from '../_components/invoice-view';
 
 export const metadata: Metadata = { title: 'Receivables' };
 
+/** Customers listed by name before the rest are summed on one line (all of them on asking). */
+const TOP_CUSTOMERS = 25;
+
+function sumTotals(customers: readonly { totals: BucketTotals }[]): BucketTotals {
+  const sum = Object.fromEntries(AGING_BUCKETS.map((b) => [b.key, 0])) as BucketTotals;
+  for (const c of customers) for (const b of AGING_BUCKETS) sum[b.key] += c.totals[b.key];
+  return sum;
+}
+
 function BucketCells({ totals }: { totals: BucketTotals }) {
   return (
     <>
@@ -29,10 +38,15 @@ function BucketCells({ totals }: { totals: BucketTotals }) {
 
 export default async function ReceivablesPage({ searchParams }: { searchParams: Promise<Record<string, string | string[] | undefined>> }) {
   const user = await requirePageUser('invoices.read', '/invoices/receivables');
-  const cursor = readCursor((await searchParams).after, /^\d{4}-\d{2}-\d{2}$/, /^[A-Za-z0-9-]{1,40}$/);
+  const params = await searchParams;
+  const cursor = readCursor(params.after, /^\d{4}-\d{2}-\d{2}$/, /^[A-Za-z0-9-]{1,40}$/);
   const after = cursor ? { dueOn: cursor[0], number: cursor[1] } : null;
   const report = await receivablesReport(undefined, undefined, { after });
   const shown = report.invoices.length;
+  // The customers owing most come first; the rest on asking (the footer's totals are over all of them).
+  const allCustomers = params.customers === 'all';
+  const customers = allCustomers ? report.customers : report.customers.slice(0, TOP_CUSTOMERS);
+  const rest = report.customers.slice(customers.length);
   return (
     <div className="flex flex-col gap-4">
       <PageHeader
@@ -68,7 +82,17 @@ export default async function ReceivablesPage({ searchParams }: { searchParams: 
         <EmptyState title="Nothing is owed" description="Every issued invoice is paid or credited." />
       ) : (
         <>
-          <Card title="By customer" padding="none">
+          <Card
+            title="By customer"
+            description={
+              rest.length
+                ? `The ${customers.length} owing most, of ${report.customers.length}; the totals below are over all of them.`
+                : report.customers.length > TOP_CUSTOMERS
+                  ? `All ${report.customers.length} customers who owe.`
+                  : undefined
+            }
+            padding="none"
+          >
             <Table caption="Receivables by customer and age" captionHidden>
               <THead>
                 <tr>
@@ -82,7 +106,7 @@ export default async function ReceivablesPage({ searchParams }: { searchParams: 
                 </tr>
               </THead>
               <TBody>
-                {report.customers.map((c) => (
+                {customers.map((c) => (
                   <Tr key={c.customerId}>
                     <Td>{c.customerName}</Td>
                     <BucketCells totals={c.totals} />
@@ -91,6 +115,19 @@ export default async function ReceivablesPage({ searchParams }: { searchParams: 
                     </Td>
                   </Tr>
                 ))}
+                {rest.length ? (
+                  <Tr>
+                    <Td>
+                      <Link href="/invoices/receivables?customers=all" className={LINK}>
+                        {rest.length} more {rest.length === 1 ? 'customer' : 'customers'}
+                      </Link>
+                    </Td>
+                    <BucketCells totals={sumTotals(rest)} />
+                    <Td numeric>
+                      <Money cents={rest.reduce((t, c) => t + c.totalCents, 0)} />
+                    </Td>
+                  </Tr>
+                ) : null}
               </TBody>
               <TFoot>
                 <tr>
