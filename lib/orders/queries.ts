@@ -138,6 +138,8 @@ export async function findPortalOrders(customerId: string, before: OrderCursor |
     .select([
       'w.id', 'w.number', 'w.po_number', 'w.state', 'w.due_date', 'w.quantity_ordered', 'w.quantity_received', 'w.quantity_shipped',
       'p.part_number', 'p.revision as part_revision', 'f.name as finish_name', sql<Date>`w.created_at`.as('created_at'),
+      // The cursor keeps the microseconds a JavaScript Date would drop, so two orders made in one millisecond are both listed.
+      sql<string>`to_char(w.created_at at time zone 'UTC', 'YYYY-MM-DD"T"HH24:MI:SS.US"Z"')`.as('created_key'),
     ])
     .where('w.customer_id', '=', customerId)
     .orderBy('w.created_at', 'desc')
@@ -145,7 +147,7 @@ export async function findPortalOrders(customerId: string, before: OrderCursor |
     .limit(size + 1);
   if (before) q = q.where(sql<boolean>`(w.created_at, w.id) < (${before.createdAt}::timestamptz, ${before.id}::uuid)`);
   const rows = await q.execute();
-  const orders = rows.slice(0, size);
-  const last = orders.at(-1);
-  return { orders, next: rows.length > size && last ? { createdAt: new Date(last.created_at).toISOString(), id: last.id } : null };
+  const orders = rows.slice(0, size).map(({ created_key: _key, ...o }) => o);
+  const last = rows[size - 1];
+  return { orders, next: rows.length > size && last ? { createdAt: last.created_key, id: last.id } : null };
 }

@@ -4,6 +4,8 @@ import { afterAll, describe, expect, it } from 'vitest';
 import { db } from '@/db';
 import { customerInvoiceTotals, findInvoicePage, findInvoices, type InvoiceCursor } from '@/lib/billing/queries';
 import { findPortalOrders, type OrderCursor } from '@/lib/orders/queries';
+import { sql } from 'kysely';
+import { inRolledBackTransaction } from '../records/helpers';
 import { customerId } from './fixtures';
 
 afterAll(() => db.destroy());
@@ -42,5 +44,20 @@ describe('paging by key', () => {
     }
     expect(seen).toEqual(first.orders.map((o) => o.id));
     expect(new Set(seen).size).toBe(seen.length);
+  });
+
+  it('keeps two orders made within one millisecond apart when a page ends between them', async () => {
+    const id = await customerId('NGF');
+    await inRolledBackTransaction(async (trx) => {
+      const two = await trx.selectFrom('work_orders').select('id').where('customer_id', '=', id).orderBy('id').limit(2).execute();
+      expect(two).toHaveLength(2);
+      // The same millisecond; the one with the smaller id the later by a fraction of it.
+      await sql`update work_orders set created_at = timestamptz '2031-01-01 00:00:00.123400+00' where id = ${two[0]!.id}`.execute(trx);
+      await sql`update work_orders set created_at = timestamptz '2031-01-01 00:00:00.123456+00' where id = ${two[1]!.id}`.execute(trx);
+      const first = await findPortalOrders(id, null, 1, trx);
+      expect(first.orders.map((o) => o.id)).toEqual([two[1]!.id]);
+      const second = await findPortalOrders(id, first.next, 1, trx);
+      expect(second.orders.map((o) => o.id)).toEqual([two[0]!.id]);
+    });
   });
 });
