@@ -49,13 +49,31 @@ export function PointMark({ kind, x, y, size = 1 }: { kind: PointKind; x: number
   return <circle cx={x} cy={y} r={3.2 * size} fill={chartColors.action} stroke={chartColors.surface} strokeWidth={1} />;
 }
 
-/** A reading's time in the shop's zone (or `timeZone`): "8 Mar" on the axis, "8 Mar 2026, 14:30 EDT" in full, as elsewhere. */
-export function formatTime(t: string, style: 'tick' | 'full', timeZone?: string): string {
+const tickFormats = new Map<string, Intl.DateTimeFormat>();
+
+/**
+ * A reading's time in the shop's zone (or `timeZone`): "8 Mar" on the axis, "Mar 2026" on the axis
+ * of a range over more than a year (else five years read "3 Dec … 2 Dec"), "8 Mar 2026, 14:30 EDT"
+ * in full, as elsewhere.
+ */
+export function formatTime(t: string, style: 'tick' | 'tick-year' | 'full', timeZone?: string): string {
   const date = new Date(t);
   if (Number.isNaN(date.getTime())) return t;
   const tz = timeZone ?? shopTimeZone();
   if (style === 'full') return formatShopTime(date, tz);
-  return new Intl.DateTimeFormat('en-GB', { day: 'numeric', month: 'short', timeZone: tz }).format(date);
+  const key = `${style}|${tz}`;
+  let f = tickFormats.get(key);
+  if (!f) {
+    f = new Intl.DateTimeFormat('en-GB', style === 'tick' ? { day: 'numeric', month: 'short', timeZone: tz } : { month: 'short', year: 'numeric', timeZone: tz });
+    tickFormats.set(key, f);
+  }
+  return f.format(date);
+}
+
+/** The axis's tick style for readings from `first` to `last`. */
+export function tickStyle(first: string | undefined, last: string | undefined): 'tick' | 'tick-year' {
+  if (!first || !last) return 'tick';
+  return new Date(last).getTime() - new Date(first).getTime() > 330 * 86_400_000 ? 'tick-year' : 'tick';
 }
 
 type TooltipBodyProps = {

@@ -17,7 +17,7 @@ import { EmptyState } from '../ui/empty-state';
 import { FormMessage } from '../ui/form-message';
 import { formatUnitValue } from '../unit-value';
 import { checkLimits, preparePoints, yScale, type ChartPoint, type PreparedPoint } from './chart-model';
-import { ChartLegend, chartColors, formatTime, lineStyles, PointMark, TooltipBody } from './chart-parts';
+import { ChartLegend, chartColors, formatTime, lineStyles, PointMark, tickStyle, TooltipBody } from './chart-parts';
 import { ReadingsTable } from './readings-table';
 
 export type { ChartPoint } from './chart-model';
@@ -50,6 +50,7 @@ export function ControlChart({ points, cl, ucl, lcl, lsl, usl, unit, label, digi
   const scale = useMemo(() => yScale(prepared.points, limits), [prepared.points, limits]);
   const [showTable, setShowTable] = useState(false);
   const data = prepared.points;
+  const ticks = tickStyle(data[0]?.t, data.at(-1)?.t);
   const hasSpec = lsl !== undefined || usl !== undefined;
   const fmt = (v: number) => formatUnitValue(v, unit, { digits });
 
@@ -121,7 +122,7 @@ export function ControlChart({ points, cl, ucl, lcl, lsl, usl, unit, label, digi
           allowDecimals={false}
           tickFormatter={(i: number) => {
             const p = data[Math.round(i)];
-            return p ? formatTime(p.t, 'tick', timeZone) : '';
+            return p ? formatTime(p.t, ticks, timeZone) : '';
           }}
           tick={{ fill: chartColors.inkMuted, fontSize: 12 }}
           stroke={chartColors.line}

@@ -17,7 +17,7 @@ import { gridQueryFrom, runGridQuery, type GridOptions } from '@/lib/grid/server
 import { WORK_ORDER_GRID_COLUMNS, workOrderGridSelect } from '@/lib/orders/queries';
 import { QUOTE_GRID_COLUMNS, quoteGridSelect } from '@/lib/quotes/queries';
 import { TestSessions } from '../helpers/sessions';
-import type { BareRoutes, BareStatement } from './bare-list-server';
+import type { BareRoutes } from './bare-list-server';
 import { ROOT, startApp, startServer } from './next-server';
 import { median } from './stats';
 import type { BenchRow } from './types';
@@ -54,7 +54,7 @@ const ENDPOINTS: Endpoint[] = [
 
 // The statements the grid code runs for one request, compiled by the same code on a Kysely that
 // records instead of executing.
-async function compiledStatements(e: Endpoint): Promise<{ page: BareStatement; count: BareStatement }> {
+async function compiledStatements(e: Endpoint): Promise<BareRoutes[string]> {
   const seen: CompiledQuery[] = [];
   const recorder = new Kysely<Database>({
     dialect: {
@@ -65,12 +65,14 @@ async function compiledStatements(e: Endpoint): Promise<{ page: BareStatement; c
     },
     log: (event) => void seen.push(event.query),
   });
-  await runGridQuery(e.select(recorder), { ...e.options, db: recorder }, gridQueryFrom(new URL(e.path, 'http://bench.invalid'), e.options.columns));
+  const query = gridQueryFrom(new URL(e.path, 'http://bench.invalid'), e.options.columns);
+  await runGridQuery(e.select(recorder), { ...e.options, db: recorder }, query);
+  const chosen = query.sort ?? e.options.defaultSort ?? null;
   const count = seen.filter((q) => /count\(\*\)::int as "total"/.test(q.sql));
   const page = seen.filter((q) => !count.includes(q));
   if (seen.length !== 2 || count.length !== 1) throw new Error(`expected a page and a count statement for ${e.path}, recorded ${seen.length}`);
   const plain = (q: CompiledQuery) => ({ sql: q.sql, parameters: q.parameters });
-  return { page: plain(page[0]!), count: plain(count[0]!) };
+  return { page: plain(page[0]!), count: plain(count[0]!), frame: { colId: chosen?.colId ?? null, dir: chosen?.dir ?? 'asc' }, limit: query.limit };
 }
 
 async function addHistory(): Promise<void> {

@@ -4,6 +4,7 @@ import { formatUnitValue, UNIT_SPACE, NO_VALUE } from '@/components/unit-value';
 import { buildGridUrl, csvFileName, GRID_COUNT_CAP, lastRowOf, parseGridPage, sortParam, GridFetchError } from '@/components/data-grid/grid-query';
 import { findCurrentHref } from '@/components/nav/app-nav';
 import { checkLimits, classifyPoint, preparePoints, yScale } from '@/components/control-chart/chart-model';
+import { formatTime, tickStyle } from '@/components/control-chart/chart-parts';
 
 describe('formatMoney', () => {
   it('formats integer cents in the currency minor unit', () => {
@@ -134,5 +135,17 @@ describe('control chart model', () => {
     expect(checkLimits(limits)).toEqual([]);
     expect(checkLimits({ cl: 60, ucl: 50, lcl: 54 })).toHaveLength(1);
     expect(checkLimits({ cl: Number.NaN, ucl: 50, lcl: 54 })[0]).toMatch(/CL/);
+  });
+});
+
+describe('control chart axis labels', () => {
+  it('name the year once a range runs past a year, so five years do not read "3 Dec … 2 Dec"', () => {
+    expect(tickStyle('2026-08-05T12:00:00Z', '2026-12-03T12:00:00Z')).toBe('tick');
+    expect(tickStyle('2021-12-04T12:00:00Z', '2026-12-03T12:00:00Z')).toBe('tick-year');
+    expect(tickStyle(undefined, undefined)).toBe('tick');
+    expect(formatTime('2023-02-08T15:00:00Z', 'tick', 'America/New_York')).toBe('8 Feb');
+    expect(formatTime('2023-02-08T15:00:00Z', 'tick-year', 'America/New_York')).toBe('Feb 2023');
+    // Late on 31 December in New York is already the new year in UTC: the shop's zone decides.
+    expect(formatTime('2024-01-01T03:00:00Z', 'tick-year', 'America/New_York')).toBe('Dec 2023');
   });
 });

@@ -33,7 +33,8 @@ describe('SimpleTable', () => {
     expect(bodyRows[0]).not.toContain('line-through');
     expect(bodyRows[1]).toMatch(/<tr class="[^"]*text-ink-muted" data-retired="true">/);
     expect(bodyRows[1]).toMatch(/<td class="[^"]*line-through">ZN-2<\/td>/);
-    expect(bodyRows[1]).toMatch(/<td class="[^"]*text-right[^"]*">7 g<\/td>/);
+    // Numbers are right-aligned by the cell-num class (app/globals.css: whitespace-nowrap text-right).
+    expect(bodyRows[1]).toMatch(/<td class="[^"]*cell-num[^"]*">7 g<\/td>/);
   });
 
   it('shows the empty state instead of the table when there are no rows, and the bare header without one', () => {
