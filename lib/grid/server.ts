@@ -91,9 +91,15 @@ function withoutKeys<O>(row: O & Keyed): O {
 async function readPage<DB, TB extends keyof DB, O>(sorted: SelectQueryBuilder<DB, TB, O>, opts: GridOptions<O>, after: GridCursor | null, offset: number, limit: number): Promise<O[]> {
   if (!after) return sorted.offset(offset).limit(limit).execute();
   const rows: O[] = [];
-  for (const range of afterSql(opts.columns, after, opts.key)) {
-    rows.push(...(await sorted.where(range).limit(limit - rows.length).execute()));
-    if (rows.length >= limit) break;
+  try {
+    for (const range of afterSql(opts.columns, after, opts.key)) {
+      rows.push(...(await sorted.where(range).limit(limit - rows.length).execute()));
+      if (rows.length >= limit) break;
+    }
+  } catch (err) {
+    // A cursor edited by hand can carry a value the column's type does not read (class 22, data exception).
+    if (/^22/.test(String((err as { code?: unknown }).code ?? ''))) throw new AppError('BAD_INPUT', 'after is not a page cursor this list gave out.');
+    throw err;
   }
   return rows;
 }

@@ -4,6 +4,7 @@ import { afterAll, describe, expect, it } from 'vitest';
 import { db } from '@/db';
 import { AppError } from '@/lib/errors';
 import { GRID_COUNT_CAP, gridCsvStream, gridQueryFrom, gridResponse, runGridQuery, type GridColumns } from '@/lib/grid/server';
+import { encodeCursor } from '@/lib/grid/query';
 import { afterSql } from '@/lib/grid/sql';
 import { inRolledBackTransaction } from '../records/helpers';
 
@@ -168,6 +169,18 @@ describe('grid helper on a real table of 100,000 rows', () => {
         const byOffset = await runGridQuery(base(q), opts, gridQueryFrom(new URL(`http://x/api/probe?offset=9000&limit=500&sort=${sort}&filter=${filter}`), columns));
         expect(byOffset.rows.map((r) => r.id)).toEqual(expected.slice(9000, 9500));
       }
+      // A cursor edited by hand to carry what the column cannot hold is refused, not a server error.
+      // (Each inside a savepoint: the refused statement would end the test's own transaction.)
+      await sql`savepoint forged`.execute(q);
+      const forged = encodeCursor({ colId: 'madeOn', dir: 'desc', value: 'not a time', key: '12' });
+      await expect(runGridQuery(base(q), opts, gridQueryFrom(new URL(`http://x/api/probe?limit=10&sort=madeOn:desc&after=${forged}`), columns))).rejects.toMatchObject({
+        code: 'BAD_INPUT',
+        message: 'after is not a page cursor this list gave out.',
+      });
+      await sql`rollback to savepoint forged`.execute(q);
+      const badKey = encodeCursor({ colId: 'code', dir: 'asc', value: 'C000010', key: 'twelve' });
+      await expect(runGridQuery(base(q), opts, gridQueryFrom(new URL(`http://x/api/probe?limit=10&after=${badKey}`), columns))).rejects.toMatchObject({ code: 'BAD_INPUT' });
+      await sql`rollback to savepoint forged`.execute(q);
       // A cursor only means something in its own order.
       const page = await runGridQuery(base(q), opts, gridQueryFrom(new URL('http://x/api/probe?limit=10'), columns));
       expect(() => gridQueryFrom(new URL(`http://x/api/probe?limit=10&sort=name:desc&after=${page.next}`), columns)).toThrow('after belongs to another sort order');
