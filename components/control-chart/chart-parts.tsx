@@ -1,7 +1,7 @@
 import type { ReactNode } from 'react';
 import { formatUnitValue } from '../unit-value';
 import type { PointKind, PreparedPoint } from './chart-model';
-import { formatShopTime, shopTimeZone } from '@/lib/quality/shop-time';
+import { dateFormat, formatShopTime, shopTimeZone } from '@/lib/quality/shop-time';
 
 // Colours mirror tailwind.config.ts; SVG inside the chart is drawn with literal values.
 export const chartColors = {
@@ -49,8 +49,6 @@ export function PointMark({ kind, x, y, size = 1 }: { kind: PointKind; x: number
   return <circle cx={x} cy={y} r={3.2 * size} fill={chartColors.action} stroke={chartColors.surface} strokeWidth={1} />;
 }
 
-const tickFormats = new Map<string, Intl.DateTimeFormat>();
-
 /**
  * A reading's time in the shop's zone (or `timeZone`): "8 Mar" on the axis, "Mar 2026" on the axis
  * of a range over more than a year (else five years read "3 Dec … 2 Dec"), "8 Mar 2026, 14:30 EDT"
@@ -61,13 +59,7 @@ export function formatTime(t: string, style: 'tick' | 'tick-year' | 'full', time
   if (Number.isNaN(date.getTime())) return t;
   const tz = timeZone ?? shopTimeZone();
   if (style === 'full') return formatShopTime(date, tz);
-  const key = `${style}|${tz}`;
-  let f = tickFormats.get(key);
-  if (!f) {
-    f = new Intl.DateTimeFormat('en-GB', style === 'tick' ? { day: 'numeric', month: 'short', timeZone: tz } : { month: 'short', year: 'numeric', timeZone: tz });
-    tickFormats.set(key, f);
-  }
-  return f.format(date);
+  return dateFormat('en-GB', style === 'tick' ? { day: 'numeric', month: 'short', timeZone: tz } : { month: 'short', year: 'numeric', timeZone: tz }).format(date);
 }
 
 /** The axis's tick style for readings from `first` to `last`. */

@@ -65,16 +65,18 @@ export function thinForChart<P extends { value: number; rules: string[] }>(point
 }
 
 const DAY_MS = 86_400_000;
+/** A calendar day as the chart's range takes it, YYYY-MM-DD. */
+export const CHART_DAY = /^\d{4}-\d{2}-\d{2}$/;
 const MAX_SPAN_DAYS = 366 * 10;
 
 /** Reads `from`/`to` (YYYY-MM-DD or ISO); defaults to the last 120 days; `to` is inclusive of its day. */
 export function parseChartRange(fromText: string | null, toText: string | null, now = new Date()): ChartRange {
   const parse = (s: string, field: string) => {
-    const d = new Date(/^\d{4}-\d{2}-\d{2}$/.test(s) ? `${s}T00:00:00Z` : s);
+    const d = new Date(CHART_DAY.test(s) ? `${s}T00:00:00Z` : s);
     if (Number.isNaN(d.getTime())) throw new AppError('BAD_INPUT', `${field} is not a date.`, { [field]: ['Give a date as YYYY-MM-DD.'] });
     return d;
   };
-  const to = toText ? new Date(parse(toText, 'to').getTime() + (/^\d{4}-\d{2}-\d{2}$/.test(toText) ? DAY_MS : 0)) : now;
+  const to = toText ? new Date(parse(toText, 'to').getTime() + (CHART_DAY.test(toText) ? DAY_MS : 0)) : now;
   const from = fromText ? parse(fromText, 'from') : new Date(to.getTime() - 120 * DAY_MS);
   if (from >= to) throw new AppError('BAD_INPUT', 'The start date must be before the end date.', { from: ['Start before the end date.'] });
   if (to.getTime() - from.getTime() > MAX_SPAN_DAYS * DAY_MS) throw new AppError('BAD_INPUT', 'Choose at most ten years.', { from: ['At most ten years.'] });

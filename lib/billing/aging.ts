@@ -47,19 +47,26 @@ export function ageReceivables(invoices: readonly AgingInput[], asOf: string): A
       return { ...i, daysPastDue, bucket: agingBucket(daysPastDue) };
     })
     .sort((a, b) => b.daysPastDue - a.daysPastDue || a.number.localeCompare(b.number));
+  return { asOf, invoices: aged, ...sumAging(aged.map((i) => ({ customerId: i.customerId, customerName: i.customerName, bucket: i.bucket, openCents: i.openCents }))) };
+}
+
+/**
+ * Open amounts by bucket, overall and per customer (owing most first): from single invoices, or
+ * from sums per customer and bucket that the database worked out (lib/billing/queries.ts).
+ */
+export function sumAging(amounts: Iterable<{ customerId: string; customerName: string; bucket: AgingBucket; openCents: number }>): Pick<AgingReport, 'totals' | 'totalCents' | 'customers'> {
   const totals = emptyBucketTotals();
   const byCustomer = new Map<string, CustomerAging>();
-  for (const i of aged) {
-    totals[i.bucket] += i.openCents;
-    let c = byCustomer.get(i.customerId);
+  for (const a of amounts) {
+    totals[a.bucket] += a.openCents;
+    let c = byCustomer.get(a.customerId);
     if (!c) {
-      c = { customerId: i.customerId, customerName: i.customerName, totals: emptyBucketTotals(), totalCents: 0 };
-      byCustomer.set(i.customerId, c);
+      c = { customerId: a.customerId, customerName: a.customerName, totals: emptyBucketTotals(), totalCents: 0 };
+      byCustomer.set(a.customerId, c);
     }
-    c.totals[i.bucket] += i.openCents;
-    c.totalCents += i.openCents;
+    c.totals[a.bucket] += a.openCents;
+    c.totalCents += a.openCents;
   }
   const customers = [...byCustomer.values()].sort((a, b) => b.totalCents - a.totalCents || a.customerName.localeCompare(b.customerName));
-  const totalCents = aged.reduce((s, i) => s + i.openCents, 0);
-  return { asOf, invoices: aged, totals, totalCents, customers };
+  return { totals, totalCents: customers.reduce((t, c) => t + c.totalCents, 0), customers };
 }

@@ -3,7 +3,7 @@ import { sql, type Kysely } from 'kysely';
 import { db as defaultDb } from '@/db';
 import type { Database, InvoiceStatus } from '@/db/types';
 import { openBalanceCents } from './arithmetic';
-import { type AgedInvoice, type AgingBucket, agingBucket, type AgingReport, type CustomerAging, emptyBucketTotals } from './aging';
+import { type AgedInvoice, type AgingBucket, agingBucket, type AgingReport, sumAging } from './aging';
 import { daysBetweenIso, isoDate, todayIso } from './dates';
 import { isUuid } from './orders';
 
@@ -222,19 +222,8 @@ export async function receivablesReport(
     list.execute(),
     creditsOnAccount(database),
   ]);
-  const totals = emptyBucketTotals();
-  const byCustomer = new Map<string, CustomerAging>();
-  let invoiceCount = 0;
-  for (const g of grouped) {
-    const cents = Number(g.open);
-    invoiceCount += g.n;
-    totals[g.bucket] += cents;
-    let c = byCustomer.get(g.customer_id);
-    if (!c) byCustomer.set(g.customer_id, (c = { customerId: g.customer_id, customerName: g.name, totals: emptyBucketTotals(), totalCents: 0 }));
-    c.totals[g.bucket] += cents;
-    c.totalCents += cents;
-  }
-  const customers = [...byCustomer.values()].sort((a, b) => b.totalCents - a.totalCents || a.customerName.localeCompare(b.customerName));
+  const invoiceCount = grouped.reduce((n, g) => n + g.n, 0);
+  const aging = sumAging(grouped.map((g) => ({ customerId: g.customer_id, customerName: g.name, bucket: g.bucket, openCents: Number(g.open) })));
   const invoices: AgedInvoice[] = rows.slice(0, size).map((r) => {
     const s = toSummary(r, asOf);
     const daysPastDue = daysBetweenIso(s.dueOn, asOf);
@@ -246,9 +235,7 @@ export async function receivablesReport(
     invoices,
     invoiceCount,
     next: rows.length > size && last ? { dueOn: last.dueOn, number: last.number } : null,
-    totals,
-    totalCents: customers.reduce((t, c) => t + c.totalCents, 0),
-    customers,
+    ...aging,
     ...credit,
   };
 }

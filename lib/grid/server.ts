@@ -16,7 +16,7 @@ import { db as defaultDb } from '@/db';
 import { sql } from 'kysely';
 import { contentDisposition, csvLine } from './csv';
 import { encodeCursor, GRID_COUNT_CAP, type GridColumnInfo, type GridCursor, type GridQuery, parseGridQuery } from './query';
-import { afterSql, columnExpr, type GridColumns, type GridSearch, orderSql, whereSql } from './sql';
+import { afterSql, columnExpr, type GridColumns, type GridSearch, keyExpr, orderSql, whereSql } from './sql';
 
 export type { GridColumn, GridColumns, GridSearch } from './sql';
 export type { GridQuery, GridColumnType } from './query';
@@ -72,9 +72,8 @@ function keyed<DB, TB extends keyof DB, O>(qb: SelectQueryBuilder<DB, TB, O>, op
   if (query.after && (query.after.colId !== frame.colId || query.after.dir !== frame.dir)) {
     throw new AppError('BAD_INPUT', 'after belongs to another sort order; ask for the page by offset.');
   }
-  const key = typeof opts.key === 'string' ? sql.ref(opts.key) : sql`(${opts.key})`;
   const sortText = chosen ? sql<string | null>`(${columnExpr(opts.columns[chosen.colId])})::text` : sql<null>`null`;
-  const select = qb.select([sortText.as(SORT_TEXT), sql<string>`(${key})::text`.as(KEY_TEXT)]) as unknown as SelectQueryBuilder<DB, TB, O & Keyed>;
+  const select = qb.select([sortText.as(SORT_TEXT), sql<string>`(${keyExpr(opts.key)})::text`.as(KEY_TEXT)]) as unknown as SelectQueryBuilder<DB, TB, O & Keyed>;
   return { frame, select };
 }
 

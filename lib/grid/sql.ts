@@ -31,6 +31,11 @@ export function columnExpr(col: GridColumn | undefined): Expression<unknown> {
   return typeof col.expr === 'string' ? sql.ref(col.expr) : sql`(${col.expr})`;
 }
 
+/** A list's unique key (a column reference or an expression) as one operand. */
+export function keyExpr(key: string | Expression<unknown>): Expression<unknown> {
+  return typeof key === 'string' ? sql.ref(key) : sql`(${key})`;
+}
+
 /** Escapes LIKE wildcards so the user's text matches literally (backslash is PostgreSQL's default escape). */
 export function escapeLike(text: string): string {
   return text.replace(/[\\%_]/g, (c) => `\\${c}`);
@@ -189,10 +194,9 @@ export function orderSql(
   key: string | Expression<unknown>,
 ): RawBuilder<unknown>[] {
   const chosen = sort ?? fallback;
-  const keyExpr = typeof key === 'string' ? sql.ref(key) : key;
   const terms: RawBuilder<unknown>[] = [];
   if (chosen) terms.push(sql`${columnExpr(columns[chosen.colId])} ${sql.raw(chosen.dir)}`);
-  terms.push(sql`${keyExpr} ${sql.raw(chosen?.dir ?? 'asc')}`);
+  terms.push(sql`${keyExpr(key)} ${sql.raw(chosen?.dir ?? 'asc')}`);
   return terms;
 }
 
@@ -204,7 +208,7 @@ export function orderSql(
  * value is bound untyped, so it takes the column's own type.
  */
 export function afterSql(columns: GridColumns, cursor: GridCursor, key: string | Expression<unknown>): RawBuilder<SqlBool>[] {
-  const k = typeof key === 'string' ? sql.ref(key) : sql`(${key})`;
+  const k = keyExpr(key);
   if (cursor.colId === null) return [sql<SqlBool>`${k} ${sql.raw(cursor.dir === 'asc' ? '>' : '<')} ${cursor.key}`];
   const e = columnExpr(columns[cursor.colId]);
   const v = cursor.value;

@@ -7,7 +7,7 @@ import { badInput } from '../bath/checks';
 export const DEFAULT_SHOP_TIME_ZONE = 'America/New_York';
 
 // Making an Intl.DateTimeFormat costs some 0.15 ms, formatting with one a microsecond: a list of a
-// hundred dates builds none of its own. Each formatter is made once per zone and kept.
+// hundred dates builds none of its own. Each formatter is made once (dateFormat) and kept.
 const zoneChecks = new Map<string, boolean>();
 
 export function isTimeZone(tz: string): boolean {
@@ -24,42 +24,26 @@ export function isTimeZone(tz: string): boolean {
   return ok;
 }
 
-function kept(cache: Map<string, Intl.DateTimeFormat>, tz: string, make: () => Intl.DateTimeFormat): Intl.DateTimeFormat {
-  let f = cache.get(tz);
+const keptFormats = new Map<string, Intl.DateTimeFormat>();
+
+/** An Intl.DateTimeFormat made once per locale and options (the zone among them) and kept; a zone that is not real throws and is never kept. */
+export function dateFormat(locale: string, options: Intl.DateTimeFormatOptions): Intl.DateTimeFormat {
+  const key = `${locale}|${JSON.stringify(options)}`;
+  let f = keptFormats.get(key);
   if (!f) {
-    f = make();
-    // A zone that is not real throws above and is never kept; the real ones number a few hundred.
-    cache.set(tz, f);
+    f = new Intl.DateTimeFormat(locale, options);
+    keptFormats.set(key, f);
   }
   return f;
 }
-
-const abbreviationFormatters = new Map<string, Intl.DateTimeFormat>();
-const dateFormatters = new Map<string, Intl.DateTimeFormat>();
 
 export function shopTimeZone(): string {
   const tz = process.env.SHOP_TIME_ZONE?.trim();
   return tz && isTimeZone(tz) ? tz : DEFAULT_SHOP_TIME_ZONE;
 }
 
-const formatters = new Map<string, Intl.DateTimeFormat>();
-
 function partsFormatter(tz: string): Intl.DateTimeFormat {
-  let f = formatters.get(tz);
-  if (!f) {
-    f = new Intl.DateTimeFormat('en-US', {
-      timeZone: tz,
-      hourCycle: 'h23',
-      year: 'numeric',
-      month: '2-digit',
-      day: '2-digit',
-      hour: '2-digit',
-      minute: '2-digit',
-      second: '2-digit',
-    });
-    formatters.set(tz, f);
-  }
-  return f;
+  return dateFormat('en-US', { timeZone: tz, hourCycle: 'h23', year: 'numeric', month: '2-digit', day: '2-digit', hour: '2-digit', minute: '2-digit', second: '2-digit' });
 }
 
 type Wall = { year: number; month: number; day: number; hour: number; minute: number; second: number };
@@ -123,8 +107,7 @@ export function toLocalInputValue(at: Date | string | number, tz: string): strin
 
 /** The zone's short name at that instant as US English writes it ("EDT"), else "GMT+1"-style. */
 function zoneAbbreviation(d: Date, tz: string): string {
-  const f = kept(abbreviationFormatters, tz, () => new Intl.DateTimeFormat('en-US', { timeZone: tz, timeZoneName: 'short' }));
-  const part = f.formatToParts(d).find((p) => p.type === 'timeZoneName');
+  const part = dateFormat('en-US', { timeZone: tz, timeZoneName: 'short' }).formatToParts(d).find((p) => p.type === 'timeZoneName');
   return part?.value ?? tz;
 }
 
@@ -140,5 +123,5 @@ export function formatShopTime(at: Date | string | number, tz: string): string {
 export function formatShopDate(at: Date | string | number, tz: string): string {
   const d = new Date(at);
   if (Number.isNaN(d.getTime())) return '—';
-  return kept(dateFormatters, tz, () => new Intl.DateTimeFormat('en-GB', { timeZone: tz, day: 'numeric', month: 'short', year: 'numeric' })).format(d);
+  return dateFormat('en-GB', { timeZone: tz, day: 'numeric', month: 'short', year: 'numeric' }).format(d);
 }

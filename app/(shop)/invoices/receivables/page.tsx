@@ -7,7 +7,7 @@ import { EmptyState } from '@/components/ui/empty-state';
 import { PageHeader } from '@/components/ui/page-header';
 import { Table, TBody, Td, TFoot, Th, THead, Tr } from '@/components/ui/table';
 import { can, requirePageUser } from '@/lib/auth/current-user';
-import { AGING_BUCKETS, type BucketTotals } from '@/lib/billing/aging';
+import { AGING_BUCKETS, type BucketTotals, sumAging } from '@/lib/billing/aging';
 import { receivablesReport } from '@/lib/billing/queries';
 import { formatDay } from '@/lib/quotes/format';
 import { BillingTabs } from '../_components/billing-tabs';
@@ -18,11 +18,6 @@ export const metadata: Metadata = { title: 'Receivables' };
 /** Customers listed by name before the rest are summed on one line (all of them on asking). */
 const TOP_CUSTOMERS = 25;
 
-function sumTotals(customers: readonly { totals: BucketTotals }[]): BucketTotals {
-  const sum = Object.fromEntries(AGING_BUCKETS.map((b) => [b.key, 0])) as BucketTotals;
-  for (const c of customers) for (const b of AGING_BUCKETS) sum[b.key] += c.totals[b.key];
-  return sum;
-}
 
 function BucketCells({ totals }: { totals: BucketTotals }) {
   return (
@@ -47,6 +42,8 @@ export default async function ReceivablesPage({ searchParams }: { searchParams: 
   const allCustomers = params.customers === 'all';
   const customers = allCustomers ? report.customers : report.customers.slice(0, TOP_CUSTOMERS);
   const rest = report.customers.slice(customers.length);
+  // The rest on one line: their buckets summed as the report sums invoices.
+  const restAging = sumAging(rest.flatMap((c) => AGING_BUCKETS.map((b) => ({ customerId: c.customerId, customerName: c.customerName, bucket: b.key, openCents: c.totals[b.key] }))));
   return (
     <div className="flex flex-col gap-4">
       <PageHeader
@@ -122,9 +119,9 @@ export default async function ReceivablesPage({ searchParams }: { searchParams: 
                         {rest.length} more {rest.length === 1 ? 'customer' : 'customers'}
                       </Link>
                     </Td>
-                    <BucketCells totals={sumTotals(rest)} />
+                    <BucketCells totals={restAging.totals} />
                     <Td numeric>
-                      <Money cents={rest.reduce((t, c) => t + c.totalCents, 0)} />
+                      <Money cents={restAging.totalCents} />
                     </Td>
                   </Tr>
                 ) : null}

@@ -1,6 +1,6 @@
 // GET /api/baths/<tankId>/analytes/<analyteId>/chart?from&to[&limits=baseline][&format=csv] — staff who may read
 // bath records (bath.read): the analyte's individuals chart data, in the reader's units.
-import { chartCsv, getChartData, parseChartRange } from '@/lib/bath/chart';
+import { CHART_DAY, chartCsv, getChartData, parseChartRange } from '@/lib/bath/chart';
 import { chartJson } from '@/lib/bath/chart-cache';
 import { AppError } from '@/lib/errors';
 import { withPermission } from '@/lib/http';
@@ -8,7 +8,6 @@ import { conditionalJsonText } from '@/lib/http-etag';
 
 export const dynamic = 'force-dynamic';
 
-const DAY = /^\d{4}-\d{2}-\d{2}$/;
 const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
 
 export const GET = withPermission<{ tankId: string; analyteId: string }>('bath.read', async (req, user, ctx) => {
@@ -20,7 +19,7 @@ export const GET = withPermission<{ tankId: string; analyteId: string }>('bath.r
   if (params.get('format') !== 'csv') {
     // A range of whole days (what the chart screen asks for) is stored once per change of its
     // analyte (lib/bath/chart-cache.ts); any other range is worked out each time.
-    const days = [params.get('from'), params.get('to')].every((d) => d !== null && DAY.test(d));
+    const days = [params.get('from'), params.get('to')].every((d) => d !== null && CHART_DAY.test(d));
     if (days) return conditionalJsonText(req, await chartJson(tankId, analyteId, range, user.unitSystem, basis));
     return conditionalJsonText(req, JSON.stringify(await getChartData(tankId, analyteId, range, user.unitSystem, undefined, basis)));
   }
