@@ -6,8 +6,9 @@ import type { QuoteTables } from './types/quotes';
 import type { QualityTables } from './types/quality';
 import type { BillingTables } from './types/billing';
 import type { BathTables } from './types/bath';
+import type { DockTables } from './types/dock';
 
-export type Database = FoundationTables & CoreRecordTables & QuoteTables & QualityTables & BillingTables & BathTables;
+export type Database = FoundationTables & CoreRecordTables & QuoteTables & QualityTables & BillingTables & BathTables & DockTables;
 
 export * from './types/foundation';
 export * from './types/core-records';
@@ -15,4 +16,5 @@ export * from './types/quotes';
 export * from './types/quality';
 export * from './types/billing';
 export * from './types/bath';
+export * from './types/dock';
 export type { Json, Timestamp, GeneratedTimestamp, TimestampNullable, DateColumn, Numeric, NumericNullable } from './types/columns';

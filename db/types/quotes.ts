@@ -7,7 +7,7 @@ export type QuoteStatus = 'draft' | 'sent' | 'accepted' | 'declined' | 'expired'
 export type WorkOrderState = 'accepted' | 'received' | 'in_process' | 'plated' | 'baked' | 'inspected' | 'shipped' | 'invoiced';
 
 export type NumberCountersTable = {
-  series: 'quote' | 'work_order' | 'invoice' | 'credit_note' | 'certificate';
+  series: 'quote' | 'work_order' | 'invoice' | 'credit_note' | 'certificate' | 'receipt' | 'shipment';
   year: number;
   last_seq: number;
 };
@@ -67,6 +67,10 @@ export type WorkOrdersTable = {
   quantity_ordered: number;
   quantity_received: Generated<number>;
   quantity_shipped: Generated<number>;
+  quantity_scrapped: Generated<number>;
+  quantity_held: Generated<number>;
+  rework_of_id: Generated<string | null>;
+  rework_nonconformance_id: Generated<string | null>;
   state: Generated<WorkOrderState>;
   bake_required: Generated<boolean>;
   is_rush: Generated<boolean>;

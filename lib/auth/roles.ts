@@ -33,6 +33,8 @@ export const PERMISSIONS = {
   'orders.read': ALL_STAFF,
   'orders.advance': ['owner', 'supervisor', 'plater'],
   'runs.log': ['owner', 'supervisor', 'plater'],
+  'dock.receive': ['owner', 'supervisor', 'plater'],
+  'dock.ship': ['owner', 'supervisor', 'plater'],
   'bath.read': ALL_STAFF,
   'bath.log': ['owner', 'supervisor', 'plater'],
   'bath.limits': ['owner', 'supervisor'],

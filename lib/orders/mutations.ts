@@ -5,6 +5,7 @@ import { db as defaultDb } from '@/db';
 import type { Database, WorkOrderState } from '@/db/types';
 import { AppError } from '@/lib/errors';
 import { assertCan, type Actor } from '@/lib/quotes/access';
+import { insertReceipt } from '@/lib/dock/receiving';
 import { changeWorkOrderState, WORK_ORDER_STATES } from './states';
 
 type Db = Kysely<Database>;
@@ -19,7 +20,6 @@ export const advanceSchema = z.object({
   workOrderId: z.uuid(),
   to: z.enum(WORK_ORDER_STATES as [WorkOrderState, ...WorkOrderState[]], { error: 'Choose the next step.' }),
   quantityReceived: count('parts received'),
-  quantityShipped: count('parts shipped'),
   note: z.string().trim().max(500, 'Use at most 500 characters.').default(''),
 });
 export type AdvanceInput = z.infer<typeof advanceSchema>;
@@ -27,16 +27,17 @@ export type AdvanceInput = z.infer<typeof advanceSchema>;
 /** Moves a work order one step on; the state machine refuses skipped steps with the reason. */
 export async function advanceWorkOrder(actor: Actor, input: AdvanceInput, conn: Db = defaultDb): Promise<void> {
   assertCan(actor, 'orders.advance');
-  await conn.transaction().execute((trx) =>
-    changeWorkOrderState(trx, {
-      workOrderId: input.workOrderId,
-      to: input.to,
-      actorId: actor.id,
-      note: input.note,
-      quantityReceived: input.quantityReceived,
-      quantityShipped: input.quantityShipped,
-    }),
-  );
+  await conn.transaction().execute(async (trx) => {
+    // Parts arrive through a receipt; this short form (a count alone) is the dock's quickest one.
+    if (input.to === 'received' && input.quantityReceived !== undefined) {
+      const wo = await trx.selectFrom('work_orders').select('state').where('id', '=', input.workOrderId).executeTakeFirst();
+      if (wo?.state === 'accepted') {
+        await insertReceipt(trx, actor, input.workOrderId, { quantity: input.quantityReceived, containers: 1, conditionNote: input.note });
+        return;
+      }
+    }
+    await changeWorkOrderState(trx, { workOrderId: input.workOrderId, to: input.to, actorId: actor.id, note: input.note });
+  });
 }
 
 export const dueDateSchema = z.object({

@@ -72,6 +72,7 @@ export async function getWorkOrder(workOrderId: string, conn: Db = defaultDb) {
     .leftJoin('quotes as q', 'q.id', 'l.quote_id')
     .select([
       'w.id', 'w.number', 'w.customer_id', 'w.po_number', 'w.due_date', 'w.quantity_ordered', 'w.quantity_received', 'w.quantity_shipped',
+      'w.quantity_scrapped', 'w.quantity_held', 'w.rework_of_id', 'w.rework_nonconformance_id',
       'w.state', 'w.bake_required', 'w.is_rush', 'w.unit_price_cents', 'w.pricing_basis', 'w.total_cents', 'w.quoted_cost',
       sql<Date>`w.created_at`.as('created_at'),
       'c.name as customer_name', 'c.code as customer_code', 'c.shipping_address',

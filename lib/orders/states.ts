@@ -3,6 +3,7 @@
 import { type Kysely, type Transaction, sql } from 'kysely';
 import type { Database, WorkOrderState } from '@/db/types';
 import { AppError } from '@/lib/errors';
+import { countsOf, inShop, isBalanced } from '@/lib/dock/counts';
 import { bakedGuard, inspectedGuard } from '@/lib/quality/guards';
 
 export const WORK_ORDER_STATES: readonly WorkOrderState[] = [
@@ -54,24 +55,33 @@ export type StateChangeRequest = {
   to: WorkOrderState;
   actorId: string | null;
   note?: string;
-  quantityReceived?: number;
-  quantityShipped?: number;
 };
 
 type Db = Kysely<Database> | Transaction<Database>;
-type LockedOrder = { id: string; state: WorkOrderState; bake_required: boolean; quantity_ordered: number; quantity_received: number };
+type LockedOrder = {
+  id: string;
+  state: WorkOrderState;
+  bake_required: boolean;
+  quantity_ordered: number;
+  quantity_received: number;
+  quantity_shipped: number;
+  quantity_scrapped: number;
+  quantity_held: number;
+};
+
+// Shipping and invoicing wait until every received part is shipped, scrapped or held.
+const balancedGuard = (verb: string): StateGuard => async (_db, o) => {
+  const c = countsOf(o);
+  if (isBalanced(c)) return null;
+  return `The order cannot be ${verb} while ${inShop(c).toLocaleString('en-US')} of its ${c.received.toLocaleString('en-US')} received parts are unaccounted for (shipped ${c.shipped.toLocaleString('en-US')}, scrapped ${c.scrapped.toLocaleString('en-US')}, held ${c.held.toLocaleString('en-US')}): ship, scrap or hold them first.`;
+};
 
 // A guard returns the reason a step cannot be taken yet, or null. Other areas (quality records,
 // invoicing) add their check functions to the table below rather than writing state changes.
 export type StateGuard = (db: Db, order: LockedOrder, req: StateChangeRequest) => Promise<string | null>;
 
 const guards: Partial<Record<WorkOrderState, StateGuard[]>> = {
-  received: [
-    async (_db, _o, req) =>
-      req.quantityReceived === undefined || !Number.isInteger(req.quantityReceived) || req.quantityReceived <= 0
-        ? 'Enter how many parts were received.'
-        : null,
-  ],
+  received: [async (_db, o) => (o.quantity_received > 0 ? null : 'Record the parts on a receipt at the dock first.')],
   plated: [
     async (db, o) => {
       const r = await db.selectFrom('plating_runs').select(sql<number>`count(*)::int`.as('n')).where('work_order_id', '=', o.id).executeTakeFirstOrThrow();
@@ -91,19 +101,14 @@ const guards: Partial<Record<WorkOrderState, StateGuard[]>> = {
   ],
   baked: [async (_db, o) => (o.bake_required ? null : 'This order does not require an embrittlement-relief bake.'), bakedGuard],
   inspected: [inspectedGuard],
-  shipped: [
-    async (_db, o, req) => {
-      const q = req.quantityShipped;
-      if (q === undefined || !Number.isInteger(q) || q <= 0) return 'Enter how many parts are shipped.';
-      return q > o.quantity_received ? `Cannot ship ${q} parts: only ${o.quantity_received} were received.` : null;
-    },
-  ],
+  shipped: [async (_db, o) => (o.quantity_shipped > 0 ? null : 'Make a shipment with its packing slip first.'), balancedGuard('closed as shipped')],
+  invoiced: [balancedGuard('invoiced')],
 };
 
 export async function changeWorkOrderState(trx: Transaction<Database>, req: StateChangeRequest): Promise<void> {
   const order = await trx
     .selectFrom('work_orders')
-    .select(['id', 'state', 'bake_required', 'quantity_ordered', 'quantity_received'])
+    .select(['id', 'state', 'bake_required', 'quantity_ordered', 'quantity_received', 'quantity_shipped', 'quantity_scrapped', 'quantity_held'])
     .where('id', '=', req.workOrderId)
     .forUpdate()
     .executeTakeFirst();
@@ -127,8 +132,6 @@ export async function changeWorkOrderState(trx: Transaction<Database>, req: Stat
     .set({
       state: req.to,
       updated_at: sql`now()`,
-      ...(req.to === 'received' ? { quantity_received: req.quantityReceived } : {}),
-      ...(req.to === 'shipped' ? { quantity_shipped: req.quantityShipped } : {}),
     })
     .where('id', '=', order.id)
     .execute();

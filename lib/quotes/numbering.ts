@@ -10,6 +10,8 @@ const FORMAT: Partial<Record<Series, { prefix: string; digits: number }>> = {
   quote: { prefix: 'Q', digits: 4 },
   work_order: { prefix: 'W', digits: 5 },
   certificate: { prefix: 'CC', digits: 5 },
+  receipt: { prefix: 'R', digits: 5 },
+  shipment: { prefix: 'S', digits: 5 },
 };
 
 export function formatDocumentNumber(series: Series, year: number, seq: number): string {

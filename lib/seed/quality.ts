@@ -5,6 +5,7 @@
 // and tries again on the next seed.
 import { sql, type Kysely } from 'kysely';
 import type { Database, Role } from '@/db/types';
+import { createShipment } from '@/lib/dock/shipping';
 import { changeWorkOrderState } from '@/lib/orders/states';
 import type { Actor } from '@/lib/quality/access';
 import { recordBake } from '@/lib/quality/bake/records';
@@ -30,8 +31,23 @@ export function readingsFor(count: number, centreUm: number, spreadUm: number, s
   });
 }
 
-async function move(db: Kysely<Database>, workOrderId: string, to: 'baked' | 'inspected' | 'shipped', actorId: string, quantityShipped?: number) {
-  await db.transaction().execute((trx) => changeWorkOrderState(trx, { workOrderId, to, actorId, quantityShipped, note: 'Quality records complete' }));
+async function move(db: Kysely<Database>, workOrderId: string, to: 'baked' | 'inspected', actorId: string) {
+  await db.transaction().execute((trx) => changeWorkOrderState(trx, { workOrderId, to, actorId, note: 'Quality records complete' }));
+}
+
+// The first certified order leaves in two boxes a day apart; the other in one.
+async function ship(db: Kysely<Database>, workOrderId: string, quantity: number, people: Actor, at: Date, split: boolean) {
+  const first = split ? Math.ceil(quantity / 2) : quantity;
+  const parts = split ? [first, quantity - first] : [first];
+  for (const [k, q] of parts.entries()) {
+    if (q <= 0) continue;
+    await createShipment(
+      people,
+      { workOrderId, quantity: q, containers: Math.max(1, Math.ceil(q / 500)), weightKg: undefined, carrier: k === 0 ? 'Harbourline Freight' : 'Customer pickup', trackingNumber: k === 0 ? `HF${workOrderId.slice(0, 8).toUpperCase()}` : '' },
+      db,
+      new Date(at.getTime() + k * 24 * HOUR),
+    );
+  }
 }
 
 export async function seedQuality(db: Kysely<Database>): Promise<void> {
@@ -73,7 +89,7 @@ export async function seedQuality(db: Kysely<Database>): Promise<void> {
     await recordReadings(plater, { workOrderId: c.id, entry: 'manual', readings: values.map((t, k) => ({ partNo: k + 1, location: k % 3 === 0 ? 'head, top face' : 'shank, mid-length', method: 'B568', thicknessUm: t })) }, db);
     await move(db, c.id, 'inspected', supervisor.id);
     await issueCertificate(supervisor, c.id, later, db);
-    await move(db, c.id, 'shipped', supervisor.id, c.quantity_received);
+    await ship(db, c.id, c.quantity_received, supervisor, new Date(later.getTime() + 2 * HOUR), i === 0);
     await sql`update thickness_readings set recorded_at = ${new Date(platingEnd.getTime() + 20 * HOUR)} where work_order_id = ${c.id}`.execute(db);
   }
 

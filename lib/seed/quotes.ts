@@ -7,6 +7,7 @@ import type { Actor } from '@/lib/quotes/access';
 import { acceptQuote, declineQuote, markQuoteSent, reviseQuote } from '@/lib/quotes/lifecycle';
 import { addQuoteLine, createQuote } from '@/lib/quotes/mutations';
 import type { LinePrice } from '@/lib/quotes/pricing';
+import { recordReceipt } from '@/lib/dock/receiving';
 import { advanceWorkOrder } from '@/lib/orders/mutations';
 import { findTanksForFinish, getWorkOrder } from '@/lib/orders/queries';
 import { familyParams, getFamily } from '@/lib/families';
@@ -41,7 +42,14 @@ export async function runOrder(db: Kysely<Database>, woId: string, people: { pla
   const wo = await getWorkOrder(woId, db);
   if (!wo) return;
   if (wo.state === 'accepted') {
-    await advanceWorkOrder(people.supervisor, { workOrderId: woId, to: 'received', quantityReceived: wo.quantity_ordered, quantityShipped: undefined, note: 'Counted at the dock' }, db);
+    await recordReceipt(
+      people.supervisor,
+      {
+        workOrderId: woId, quantity: wo.quantity_ordered, containers: Math.max(1, Math.ceil(wo.quantity_ordered / 500)), weightKg: wo.weight_g ? Math.round((wo.weight_g * wo.quantity_ordered) / 10) / 100 : undefined,
+        customerPartNumber: `${wo.customer_code}-${wo.part_number}`, customerLot: `L${wo.number.slice(-4)}`, conditionNote: 'Counted at the dock', discrepancy: 'none', discrepancyNote: '', photoIds: [],
+      },
+      db,
+    );
   }
   const cost = wo.quoted_cost as LinePrice;
   const [tank] = await findTanksForFinish(wo, db);
@@ -67,7 +75,7 @@ export async function runOrder(db: Kysely<Database>, woId: string, people: { pla
       new Date(opts.endedAt.getTime() + i * 3_600_000),
     );
   }
-  if (opts.toPlated) await advanceWorkOrder(people.supervisor, { workOrderId: woId, to: 'plated', quantityReceived: undefined, quantityShipped: undefined, note: '' }, db);
+  if (opts.toPlated) await advanceWorkOrder(people.supervisor, { workOrderId: woId, to: 'plated', quantityReceived: undefined, note: '' }, db);
 }
 
 /**

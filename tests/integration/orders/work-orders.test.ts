@@ -34,7 +34,7 @@ async function order(part: 'screw' | 'stem', finish: string, quantity: number): 
   return (await acceptQuote(cust.contact, { quoteId: q.id, poNumber: `PO-${suffix()}`, neededBy: null })).workOrders[0]!.id;
 }
 
-const step = (workOrderId: string, to: AdvanceInput['to'], extra: Partial<AdvanceInput> = {}): AdvanceInput => ({ workOrderId, to, note: '', quantityReceived: undefined, quantityShipped: undefined, ...extra });
+const step = (workOrderId: string, to: AdvanceInput['to'], extra: Partial<AdvanceInput> = {}): AdvanceInput => ({ workOrderId, to, note: '', quantityReceived: undefined, ...extra });
 
 function run(workOrderId: string, tankId: string, over: Partial<RunInput> = {}): RunInput {
   return {
@@ -47,7 +47,7 @@ describe('work-order steps', () => {
   it('receives, refuses runs before receipt, logs runs, and moves to in process on the first run', async () => {
     const id = await order('screw', 'ZN-B633-SC2-HS', 1500);
     expect(await outcome(logPlatingRun(people.plater, run(id, tanks.zinc)))).toBe('CONFLICT: Receive the parts before logging a plating run.');
-    expect(await outcome(advanceWorkOrder(people.plater, step(id, 'received')))).toBe('CONFLICT: Enter how many parts were received.');
+    expect(await outcome(advanceWorkOrder(people.plater, step(id, 'received')))).toBe('CONFLICT: Record the parts on a receipt at the dock first.');
     expect(await outcome(advanceWorkOrder(people.plater, step(id, 'plated')))).toMatch(/^CONFLICT: A work order that is awaiting parts cannot become plated; the next step is received/);
     await advanceWorkOrder(people.plater, step(id, 'received', { quantityReceived: 1500 }));
     expect(await outcome(advanceWorkOrder(people.supervisor, step(id, 'in_process')))).toBe('none');
@@ -104,7 +104,7 @@ describe('work-order steps', () => {
     );
     await logPlatingRun(people.plater, run(id, tanks.zinc));
     await advanceWorkOrder(people.plater, step(id, 'plated'));
-    expect(await outcome(advanceWorkOrder(people.supervisor, step(id, 'shipped', { quantityShipped: 3000 })))).toBe(
+    expect(await outcome(advanceWorkOrder(people.supervisor, step(id, 'shipped')))).toBe(
       'CONFLICT: This order requires an embrittlement-relief bake: record the bake before it can move on.',
     );
     expect(await outcome(advanceWorkOrder(people.supervisor, step(id, 'inspected')))).toMatch(/requires an embrittlement-relief bake/);
