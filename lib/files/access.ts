@@ -50,6 +50,15 @@ export const FILE_ATTACHMENTS: FileAttachment[] = [
   // Hull cell panel photos: staff who may read bath records (no customer access).
   directAttachment('hull_cell_panels', ['file_id'], 'tank_id', ['bath.read'], false),
   directAttachment('thickness_readings', ['source_file_id'], 'work_order_id', ['quality.read'], false),
+  // The dock: packing slips and receiving photos, for the floor and office and for their customer.
+  directAttachment('shipments', ['slip_file_id'], 'customer_id', ['orders.read']),
+  {
+    staff: ['orders.read'],
+    customers: true,
+    exists: (fileId, customerId) =>
+      sql<SqlBool>`exists (select 1 from receipt_photos rp join receipts r on r.id = rp.receipt_id
+        where rp.file_id = ${fileId} and ${customerId === null ? sql`true` : sql`r.customer_id = ${customerId}`})`,
+  },
 ];
 
 /** The WHERE condition under which `user` may read the file `files.id`. */

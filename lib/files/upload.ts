@@ -15,6 +15,7 @@ export type UploadPurpose = { allowed: readonly FileKind[]; permission: Permissi
 export const UPLOAD_PURPOSES = {
   drawing: { allowed: FILE_KINDS.drawing, permission: 'customers.write', label: 'a part drawing' },
   stl: { allowed: FILE_KINDS.stl, permission: 'customers.write', label: 'a part model (STL)' },
+  'receipt-photo': { allowed: FILE_KINDS.image, permission: 'dock.receive', label: 'a receiving photo' },
   'oven-chart': { allowed: ['pdf', 'png', 'jpeg', 'webp', 'csv', 'text'], permission: 'quality.record', label: 'an oven chart' },
 } as const satisfies Record<string, UploadPurpose>;
 
