@@ -13,6 +13,7 @@ export const STAFF_NAV: NavItem[] = [
   { href: '/baths', label: 'Baths', permission: 'bath.read', badge: 'openBathAlerts' },
   { href: '/estimating/workbench', label: 'Workbench', permission: 'plating.estimate' },
   { href: '/quotes', label: 'Quotes', permission: 'quotes.read' },
+  { href: '/receiving', label: 'Receiving', permission: 'dock.receive' },
   { href: '/work-orders', label: 'Work orders', permission: 'orders.read' },
   { href: '/quality', label: 'Quality', permission: 'quality.read' },
   { href: '/customers', label: 'Customers', permission: 'customers.read' },

@@ -139,6 +139,9 @@ export async function findPortalOrders(customerId: string, before: OrderCursor |
     .select([
       'w.id', 'w.number', 'w.po_number', 'w.state', 'w.due_date', 'w.quantity_ordered', 'w.quantity_received', 'w.quantity_shipped',
       'p.part_number', 'p.revision as part_revision', 'f.name as finish_name', sql<Date>`w.created_at`.as('created_at'),
+      // Actual dates at the docks: the first delivery in, the latest shipment out (indexed by order).
+      sql<Date | null>`(select min(r.received_at) from receipts r where r.work_order_id = w.id)`.as('received_at'),
+      sql<Date | null>`(select max(s.shipped_at) from shipments s where s.work_order_id = w.id)`.as('last_shipped_at'),
       // The cursor keeps the microseconds a JavaScript Date would drop, so two orders made in one millisecond are both listed.
       sql<string>`to_char(w.created_at at time zone 'UTC', 'YYYY-MM-DD"T"HH24:MI:SS.US"Z"')`.as('created_key'),
     ])

@@ -1,4 +1,5 @@
 import type { Metadata } from 'next';
+import Link from 'next/link';
 import { EmptyState } from '@/components/ui/empty-state';
 import { PageHeader } from '@/components/ui/page-header';
 import { SimpleTable } from '@/components/ui/simple-table';
@@ -26,7 +27,11 @@ export default async function PortalOrdersPage({ searchParams }: { searchParams:
         rowKey={(o) => o.id}
         empty={<EmptyState title="No orders yet" description="When you accept a quote, its work orders appear here with their progress and due date." />}
         columns={[
-          { header: 'Order', className: 'font-mono', cell: (o) => o.number },
+          {
+            header: 'Order',
+            className: 'font-mono',
+            cell: (o) => <Link href={`/portal/orders/${o.id}`}>{o.number}</Link>,
+          },
           { header: 'Your PO', cell: (o) => o.po_number },
           {
             header: 'Part',
@@ -45,11 +50,21 @@ export default async function PortalOrdersPage({ searchParams }: { searchParams:
               <>
                 {o.quantity_ordered.toLocaleString('en-US')}
                 {o.quantity_received ? <div className="text-xs text-ink-muted">{o.quantity_received.toLocaleString('en-US')} received</div> : null}
+                {o.quantity_shipped ? <div className="text-xs text-ink-muted">{o.quantity_shipped.toLocaleString('en-US')} shipped</div> : null}
               </>
             ),
           },
           { header: 'Where it stands', cell: (o) => STATE_LABELS[o.state] },
           { header: 'Due', cell: (o) => formatDay(o.due_date) },
+          {
+            header: 'Received / shipped',
+            cell: (o) => (
+              <>
+                {o.received_at ? formatDay(o.received_at) : 'Not yet received'}
+                <div className="text-xs text-ink-muted">{o.last_shipped_at ? `Shipped ${formatDay(o.last_shipped_at)}` : 'Not shipped'}</div>
+              </>
+            ),
+          },
         ]}
       />
       <KeyPager what="orders" basePath="/portal/orders" onFirstPage={!before} olderHref={next ? `/portal/orders?before=${next.createdAt}~${next.id}` : null} />

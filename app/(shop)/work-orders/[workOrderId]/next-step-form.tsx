@@ -2,7 +2,8 @@
 
 import { useActionState } from 'react';
 import type { WorkOrderState } from '@/db/types';
-import { NumberField, SelectField, TextField } from '@/components/ui/field';
+import { LinkButton } from '@/components/ui/button';
+import { SelectField, TextField } from '@/components/ui/field';
 import { FormMessage } from '@/components/ui/form-message';
 import { SubmitButton } from '@/components/ui/submit-button';
 import { initialFormState } from '@/lib/action-state';
@@ -19,28 +20,30 @@ const VERBS: Record<WorkOrderState, string> = {
   invoiced: 'Mark invoiced',
 };
 
-type Props = {
-  workOrderId: string;
-  next: WorkOrderState | null;
-  quantityOrdered: number;
-  quantityReceived: number;
-};
+type Props = { workOrderId: string; next: WorkOrderState | null };
 
 /** The one next step with the input it needs; refusals come back with their reason. */
-export function NextStepForm({ workOrderId, next, quantityOrdered, quantityReceived }: Props) {
+export function NextStepForm({ workOrderId, next }: Props) {
   const [state, action] = useActionState(advanceAction, initialFormState);
   if (!next) return <p className="text-sm text-ink-muted">This order has taken its last step.</p>;
+  // Parts come in on a receipt and leave on a shipment: both steps happen at the dock.
+  if (next === 'received' || next === 'shipped') {
+    return (
+      <div className="flex flex-col gap-2 text-sm">
+        <p>{next === 'received' ? 'Next: receive the parts at the dock, with their count, containers and lot.' : 'Next: ship the parts, in one shipment or several, each with its packing slip.'}</p>
+        <div>
+          <LinkButton href={`/work-orders/${workOrderId}/${next === 'received' ? 'receive' : 'ship'}`} size="lg">
+            {next === 'received' ? 'Receive parts' : 'Ship parts'}
+          </LinkButton>
+        </div>
+      </div>
+    );
+  }
   return (
     <form action={action} className="flex flex-col gap-3" noValidate>
       <input type="hidden" name="workOrderId" value={workOrderId} />
       <input type="hidden" name="to" value={next} />
       <FormMessage tone={state.ok ? 'success' : 'error'} message={state.message} />
-      {next === 'received' ? (
-        <NumberField label="Parts received" name="quantityReceived" unit="pc" size="lg" defaultValue={state.values?.quantityReceived ?? String(quantityOrdered)} errors={state.fieldErrors?.quantityReceived} required />
-      ) : null}
-      {next === 'shipped' ? (
-        <NumberField label="Parts shipped" name="quantityShipped" unit="pc" size="lg" defaultValue={state.values?.quantityShipped ?? String(quantityReceived)} errors={state.fieldErrors?.quantityShipped} required />
-      ) : null}
       <TextField label="Note (optional)" name="note" defaultValue={state.ok ? '' : state.values?.note} errors={state.fieldErrors?.note} />
       <div>
         <SubmitButton size="lg" pendingLabel="Saving…">
@@ -59,7 +62,6 @@ export function OtherStepForm({ workOrderId, options }: { workOrderId: string; o
       <input type="hidden" name="workOrderId" value={workOrderId} />
       <FormMessage className="w-full" tone={state.ok ? 'success' : 'error'} message={state.message} />
       <SelectField label="Move to" name="to" options={options} defaultValue={state.values?.to} errors={state.fieldErrors?.to} />
-      <NumberField label="Parts shipped" name="quantityShipped" unit="pc" hint="Only when shipping." defaultValue={state.values?.quantityShipped} errors={state.fieldErrors?.quantityShipped} />
       <SubmitButton variant="secondary" pendingLabel="Checking…">
         Try this step
       </SubmitButton>

@@ -19,6 +19,8 @@ import { nextState, STATE_LABELS, WORK_ORDER_STATES } from '@/lib/orders/states'
 import { formatNumber, formatStoredQuantity } from '@/lib/plating';
 import { BASIS_LABELS } from '@/lib/quotes/basis';
 import { formatDateTime, formatDay, formatUnitPrice } from '@/lib/quotes/format';
+import { findCountMoves, findReceipts, findReworkOrders, findShipments } from '@/lib/dock/queries';
+import { DockCard } from './dock-card';
 import { DueDateForm } from './due-date-form';
 import { JobCostCard } from './job-cost-card';
 import { NextStepForm, OtherStepForm } from './next-step-form';
@@ -34,7 +36,15 @@ export default async function WorkOrderPage({ params }: { params: Promise<{ work
   const wo = UUID.test(workOrderId) ? await getWorkOrder(workOrderId) : null;
   if (!wo) notFound();
   const bathHazards = (await bathHazardsByFinish([wo.finish_id])).get(wo.finish_id);
-  const [events, runs, cost] = await Promise.all([findWorkOrderEvents(wo.id), findPlatingRuns(wo.id), can(user, 'reports.read') ? getJobCost(wo.id) : null]);
+  const [events, runs, cost, receipts, shipments, moves, rework] = await Promise.all([
+    findWorkOrderEvents(wo.id),
+    findPlatingRuns(wo.id),
+    can(user, 'reports.read') ? getJobCost(wo.id) : null,
+    findReceipts(wo.id),
+    findShipments(wo.id),
+    findCountMoves(wo.id),
+    findReworkOrders(wo.id),
+  ]);
   const next = nextState(wo.state, wo.bake_required);
   const family = getFamily(wo.family);
   const runsWithCurrent = family.runsWithCurrent;
@@ -94,6 +104,8 @@ export default async function WorkOrderPage({ params }: { params: Promise<{ work
             <dt className="text-ink-muted">Quantity</dt>
             <dd className="tabular">
               {wo.quantity_ordered.toLocaleString('en-US')} ordered · {wo.quantity_received.toLocaleString('en-US')} received · {wo.quantity_shipped.toLocaleString('en-US')} shipped
+              {wo.quantity_scrapped ? ` · ${wo.quantity_scrapped.toLocaleString('en-US')} scrapped` : ''}
+              {wo.quantity_held ? ` · ${wo.quantity_held.toLocaleString('en-US')} held` : ''}
             </dd>
             <dt className="text-ink-muted">Price</dt>
             <dd>
@@ -111,7 +123,7 @@ export default async function WorkOrderPage({ params }: { params: Promise<{ work
         <Card title="Next step">
           {can(user, 'orders.advance') ? (
             <div className="flex flex-col gap-4">
-              <NextStepForm workOrderId={wo.id} next={next} quantityOrdered={wo.quantity_ordered} quantityReceived={wo.quantity_received} />
+              <NextStepForm workOrderId={wo.id} next={next} />
               <details className="text-sm">
                 <summary className="cursor-pointer text-ink-muted">Another step…</summary>
                 <div className="pt-3">
@@ -127,6 +139,8 @@ export default async function WorkOrderPage({ params }: { params: Promise<{ work
           </div>
         </Card>
       </div>
+
+      <DockCard wo={wo} receipts={receipts} shipments={shipments} moves={moves} rework={rework} may={{ receive: can(user, 'dock.receive'), ship: can(user, 'dock.ship'), move: can(user, 'orders.advance') }} />
 
       <Caution
         kind={finishHazards({
