@@ -170,10 +170,10 @@ describe.each(WALKS)('the $key line', (w) => {
       await page.getByRole('button', { name: 'Save analysis' }).click();
       await page.getByText('Analysis saved.').waitFor();
 
-      await page.goto(`${APP_URL}/work-orders/${workOrderId}`);
-      await page.getByLabel('Parts received').fill(w.quantity);
-      await page.getByRole('button', { name: /Mark received/ }).click();
-      await page.getByText('Now received.').waitFor();
+      await page.goto(`${APP_URL}/work-orders/${workOrderId}/receive`);
+      await page.getByLabel('Parts counted').fill(w.quantity);
+      await page.getByRole('button', { name: 'Save receipt' }).click();
+      await page.getByText(/^Receipt R\d{4}-\d{5} saved/).waitFor();
       await page.goto(`${APP_URL}/work-orders/${workOrderId}/log-run`);
       await page.getByLabel(/^Tank/).selectOption({ index: 1 });
       await w.run(page);

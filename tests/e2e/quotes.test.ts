@@ -124,9 +124,13 @@ describe('quote to work order', () => {
         await page.goto(`${APP_URL}/work-orders`);
         await page.getByLabel('Search work orders').fill(workOrderNumber);
         await page.locator('.ag-row[row-index="0"]').getByText(workOrderNumber).click();
-        await page.getByLabel('Parts received').fill('5000');
-        await page.getByRole('button', { name: /Mark received/ }).click();
-        await page.getByText('Now received.').waitFor();
+        await page.waitForURL(/\/work-orders\/[0-9a-f-]{36}$/);
+        const orderUrl = page.url();
+        await page.getByRole('link', { name: 'Receive parts' }).first().click();
+        await page.getByLabel('Parts counted').fill('5000');
+        await page.getByRole('button', { name: 'Save receipt' }).click();
+        await page.getByText(/^Receipt R\d{4}-\d{5} saved: 5,000 parts/).waitFor();
+        await page.goto(orderUrl);
         await page.getByRole('link', { name: 'Log a plating run' }).first().click();
         await page.getByRole('heading', { name: 'Log a plating run' }).waitFor();
         await page.getByText('Rectifier amps').click();

@@ -51,7 +51,9 @@ export function DockCard({ wo, receipts, shipments, moves, rework, may }: Props)
         {wo.rework_of_id ? <Badge tone="copper">Rework, no charge</Badge> : null}
       </div>
       {receipts.length ? (
-        <Table dense caption="Receipts">
+        <>
+        <h3 className="border-t border-surface-line px-4 pt-3 pb-1 text-sm font-semibold">Receipts</h3>
+        <Table dense caption="Receipts" captionHidden>
           <THead>
             <tr>
               <Th>Receipt</Th>
@@ -103,11 +105,14 @@ export function DockCard({ wo, receipts, shipments, moves, rework, may }: Props)
             ))}
           </TBody>
         </Table>
+        </>
       ) : (
         <p className="p-4 text-sm text-ink-muted">No parts received yet.</p>
       )}
       {moves.length ? (
-        <Table dense caption="Scrap and holds">
+        <>
+        <h3 className="border-t border-surface-line px-4 pt-3 pb-1 text-sm font-semibold">Scrap and holds</h3>
+        <Table dense caption="Scrap and holds" captionHidden>
           <THead>
             <tr>
               <Th>When</Th>
@@ -129,9 +134,12 @@ export function DockCard({ wo, receipts, shipments, moves, rework, may }: Props)
             ))}
           </TBody>
         </Table>
+        </>
       ) : null}
       {shipments.length ? (
-        <Table dense caption="Shipments">
+        <>
+        <h3 className="border-t border-surface-line px-4 pt-3 pb-1 text-sm font-semibold">Shipments</h3>
+        <Table dense caption="Shipments" captionHidden>
           <THead>
             <tr>
               <Th>Shipment</Th>
@@ -163,6 +171,7 @@ export function DockCard({ wo, receipts, shipments, moves, rework, may }: Props)
             ))}
           </TBody>
         </Table>
+        </>
       ) : null}
       {rework.length ? (
         <p className="border-t border-surface-line p-4 text-sm">

@@ -30,6 +30,7 @@ export function NextStepForm({ workOrderId, next }: Props) {
   if (next === 'received' || next === 'shipped') {
     return (
       <div className="flex flex-col gap-2 text-sm">
+        <FormMessage tone={state.ok ? 'success' : 'error'} message={state.message} />
         <p>{next === 'received' ? 'Next: receive the parts at the dock, with their count, containers and lot.' : 'Next: ship the parts, in one shipment or several, each with its packing slip.'}</p>
         <div>
           <LinkButton href={`/work-orders/${workOrderId}/${next === 'received' ? 'receive' : 'ship'}`} size="lg">

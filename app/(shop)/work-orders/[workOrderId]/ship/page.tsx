@@ -32,6 +32,12 @@ export default async function ShipPage({ params }: { params: Promise<{ workOrder
         <Card title={`Received ${c.received.toLocaleString('en-US')} · shipped ${c.shipped.toLocaleString('en-US')} · scrapped ${c.scrapped.toLocaleString('en-US')} · held ${c.held.toLocaleString('en-US')}`}>
           <ShipForm workOrderId={wo.id} available={free} />
         </Card>
+      ) : wo.state === 'shipped' || wo.state === 'invoiced' ? (
+        <EmptyState
+          title="Every part is accounted for: the order is shipped."
+          description={`Shipped ${c.shipped.toLocaleString('en-US')}, scrapped ${c.scrapped.toLocaleString('en-US')}, held ${c.held.toLocaleString('en-US')} of ${c.received.toLocaleString('en-US')} received. The packing slips are on the order.`}
+          action={<Link href={`/work-orders/${wo.id}`}>Back to the order</Link>}
+        />
       ) : (
         <EmptyState
           title={wo.state === 'inspected' ? 'Nothing left to ship' : 'Not ready to ship'}
