@@ -1,11 +1,4 @@
-// Who acts at the dock, checked inside each business function too (forms check first; scripts,
-// tests and the API reach these directly).
-import type { Role } from '@/db/types';
-import { type Permission, roleCan } from '@/lib/auth/roles';
-import { AppError } from '@/lib/errors';
+// Who acts at the dock: anyone with an id and a role (session users, seed and test actors).
+import type { Actor } from '@/lib/quotes/access';
 
-export type DockActor = { id: string; role: Role; name?: string };
-
-export function assertDock(actor: DockActor, permission: Permission): void {
-  if (!roleCan(actor.role, permission)) throw new AppError('FORBIDDEN', 'You are not allowed to do this.');
-}
+export type DockActor = Pick<Actor, 'id' | 'role' | 'name'>;

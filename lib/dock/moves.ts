@@ -4,7 +4,8 @@ import { type Kysely, sql } from 'kysely';
 import { db as defaultDb } from '@/db';
 import type { Database } from '@/db/types';
 import { AppError } from '@/lib/errors';
-import { assertDock as assertCan, type DockActor as Actor } from './actor';
+import { assertCan } from '@/lib/quotes/access';
+import type { DockActor as Actor } from './actor';
 import { applyCount, countsOf, type Counts } from './counts';
 import type { CountMoveInput } from './schemas';
 

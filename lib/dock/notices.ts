@@ -7,7 +7,7 @@ import { appUrl, sendEmail } from '@/lib/email/mailer';
 import { readFile } from '@/lib/files/store';
 import { formatDateTime } from '@/lib/quotes/format';
 import { getShopSettings } from '@/lib/users/queries';
-import { DISCREPANCY_LABELS } from './schemas';
+import { DISCREPANCY_LABELS, DISCREPANCY_SHORT } from './schemas';
 import { formatWeight } from './packing-slip-pdf';
 import { packingSlipFilename } from './shipping';
 
@@ -45,7 +45,7 @@ export async function sendDiscrepancyNotice(receiptId: string): Promise<NoticeRe
   const sent = await sendEmail({
     to: to.join(', '),
     template: 'receiving-discrepancy',
-    subject: `Receiving discrepancy on PO ${r.po_number}: ${(DISCREPANCY_LABELS[r.discrepancy].split(':')[0] ?? '').toLowerCase()}`,
+    subject: `Receiving discrepancy on PO ${r.po_number}: ${DISCREPANCY_SHORT[r.discrepancy].toLowerCase()}`,
     text: [
       'Hello,',
       '',

@@ -14,6 +14,9 @@ const optionalWeight = z.preprocess(
 const text = (max: number) => z.string().trim().max(max, `Use at most ${max} characters.`).default('');
 
 export const DISCREPANCIES = ['none', 'short', 'over', 'damaged', 'wrong_part'] as const;
+/** The discrepancy in a word or two, for badges and subjects. */
+export const DISCREPANCY_SHORT: Record<(typeof DISCREPANCIES)[number], string> = { none: 'None', short: 'Short', over: 'Over', damaged: 'Damaged', wrong_part: 'Wrong part' };
+
 export const DISCREPANCY_LABELS: Record<(typeof DISCREPANCIES)[number], string> = {
   none: 'None: as expected',
   short: 'Short: fewer parts than expected',

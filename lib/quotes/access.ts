@@ -6,7 +6,7 @@ import { AppError } from '@/lib/errors';
 
 export type Actor = { id: string; role: Role; customerId: string | null; name?: string; email?: string };
 
-export function assertCan(actor: Actor, permission: Permission): void {
+export function assertCan(actor: Pick<Actor, 'role'>, permission: Permission): void {
   if (!roleCan(actor.role, permission)) throw new AppError('FORBIDDEN', 'You are not allowed to do this.');
 }
 

@@ -8,7 +8,7 @@ import { countsOf, inShop, isBalanced, MOVE_LABELS } from '@/lib/dock/counts';
 import { formatWeight } from '@/lib/dock/packing-slip-pdf';
 import type { findCountMoves, findReceipts, findReworkOrders, findShipments } from '@/lib/dock/queries';
 import { RECEIVABLE_STATES } from '@/lib/dock/receiving';
-import { DISCREPANCY_LABELS } from '@/lib/dock/schemas';
+import { DISCREPANCY_SHORT } from '@/lib/dock/schemas';
 import type { WorkOrderDetail } from '@/lib/orders/queries';
 import { formatDateTime } from '@/lib/quotes/format';
 import { CountMoveForm, ResendButton } from './dock-forms';
@@ -80,7 +80,7 @@ export function DockCard({ wo, receipts, shipments, moves, rework, may }: Props)
                     '—'
                   ) : (
                     <div className="flex flex-col gap-1">
-                      <StatusBadge status="near" label={DISCREPANCY_LABELS[r.discrepancy].split(':')[0] ?? ''} size="sm" />
+                      <StatusBadge status="near" label={DISCREPANCY_SHORT[r.discrepancy]} size="sm" />
                       <span className="text-xs">{r.discrepancy_note}</span>
                       <span className="text-xs text-ink-muted">{r.discrepancy_emailed_at ? `E-mailed ${formatDateTime(r.discrepancy_emailed_at)}` : 'Not e-mailed yet'}</span>
                       {may.receive ? <ResendButton kind="discrepancy" id={r.id} workOrderId={wo.id} label={r.discrepancy_emailed_at ? 'E-mail again' : 'E-mail the customer'} /> : null}

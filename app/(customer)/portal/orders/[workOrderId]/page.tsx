@@ -7,7 +7,7 @@ import { SimpleTable } from '@/components/ui/simple-table';
 import { requirePageUser } from '@/lib/auth/current-user';
 import { formatWeight } from '@/lib/dock/packing-slip-pdf';
 import { getPortalOrder } from '@/lib/dock/queries';
-import { DISCREPANCY_LABELS } from '@/lib/dock/schemas';
+import { DISCREPANCY_SHORT } from '@/lib/dock/schemas';
 import { STATE_LABELS } from '@/lib/orders/states';
 import { formatDateTime, formatDay } from '@/lib/quotes/format';
 
@@ -69,7 +69,7 @@ export default async function PortalOrderPage({ params }: { params: Promise<{ wo
                 '—'
               ) : (
                 <>
-                  <strong>{DISCREPANCY_LABELS[r.discrepancy].split(':')[0]}</strong>: {r.discrepancy_note}
+                  <strong>{DISCREPANCY_SHORT[r.discrepancy]}</strong>: {r.discrepancy_note}
                   {r.photo_ids.length ? (
                     <div className="flex gap-2 text-xs">
                       {r.photo_ids.map((id, i) => (
