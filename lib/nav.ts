@@ -15,6 +15,7 @@ export const STAFF_NAV: NavItem[] = [
   { href: '/quotes', label: 'Quotes', permission: 'quotes.read' },
   { href: '/receiving', label: 'Receiving', permission: 'dock.receive' },
   { href: '/work-orders', label: 'Work orders', permission: 'orders.read' },
+  { href: '/schedule', label: 'Schedule', permission: 'schedule.read' },
   { href: '/quality', label: 'Quality', permission: 'quality.read' },
   { href: '/customers', label: 'Customers', permission: 'customers.read' },
   { href: '/parts', label: 'Parts', permission: 'customers.read' },

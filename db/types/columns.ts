@@ -12,3 +12,5 @@ export type DateColumn = ColumnType<Date, Date | string, Date | string>;
 // numeric comes back as number (parser registered in db/pool.ts).
 export type Numeric = ColumnType<number, number | string, number | string>;
 export type NumericNullable = ColumnType<number | null, number | string | null | undefined, number | string | null>;
+// A numeric column with a default: optional on insert.
+export type NumericWithDefault = ColumnType<number, number | string | undefined, number | string>;

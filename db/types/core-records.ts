@@ -1,6 +1,6 @@
 // Tables of migration 2026_12_01_2210_create_core_records.
 import type { Generated, Selectable } from 'kysely';
-import type { Json, Numeric, NumericNullable, DateColumn, Timestamp, GeneratedTimestamp, TimestampNullable } from './columns';
+import type { Json, Numeric, NumericNullable, NumericWithDefault, DateColumn, Timestamp, GeneratedTimestamp, TimestampNullable } from './columns';
 
 export type FilesTable = {
   id: Generated<string>;
@@ -52,6 +52,11 @@ export type TanksTable = {
   /** What the tank's process family needs to run it (lib/families/*): see each family's tank settings. */
   family_settings: Json<Record<string, unknown>>;
   made_up_at: TimestampNullable;
+  /** The line's schedule (migration 2026_12_04_0615): one load's cycle, a load's work area, manned shifts. */
+  cycle_minutes: NumericWithDefault;
+  load_area_dm2: NumericNullable;
+  shifts_per_day: Generated<number>;
+  shift_hours: NumericWithDefault;
 };
 
 export type CalculationsTable = {

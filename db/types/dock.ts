@@ -1,6 +1,6 @@
 // Tables of migration 2026_12_03_2200_dock_records.
 import type { Generated, Selectable } from 'kysely';
-import type { GeneratedTimestamp, NumericNullable, TimestampNullable } from './columns';
+import type { DateColumn, GeneratedTimestamp, NumericNullable, TimestampNullable } from './columns';
 
 export type Discrepancy = 'none' | 'short' | 'over' | 'damaged' | 'wrong_part';
 export type CountMoveKind = 'scrap' | 'hold' | 'release' | 'scrap_held';
@@ -57,11 +57,20 @@ export type ShipmentsTable = {
   created_at: GeneratedTimestamp;
 };
 
+export type SchedulePlacementsTable = {
+  work_order_id: string;
+  tank_id: string;
+  day: DateColumn;
+  placed_by: string | null;
+  placed_at: GeneratedTimestamp;
+};
+
 export type DockTables = {
   receipts: ReceiptsTable;
   receipt_photos: ReceiptPhotosTable;
   count_moves: CountMovesTable;
   shipments: ShipmentsTable;
+  schedule_placements: SchedulePlacementsTable;
 };
 
 export type Receipt = Selectable<ReceiptsTable>;

@@ -34,6 +34,8 @@ export type QuotesTable = {
   decided_by: string | null;
   po_number: string | null;
   decline_reason: string | null;
+  /** Working days from acceptance to shipping, from the line's schedule when the quote was sent. */
+  turnaround_days: Generated<number | null>;
 };
 
 export type QuoteLinesTable = {

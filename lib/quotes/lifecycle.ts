@@ -12,6 +12,8 @@ import { canRevise, effectiveQuoteStatus, expiryFrom, nextRevision, QUOTE_STATUS
 // A quote after drafting: sent (with its validity clock), revised, accepted with a PO (which
 // opens the work orders) or declined. E-mails are sent by the caller after these commit.
 
+import { quoteTurnaroundDays } from '@/lib/schedule/queries';
+
 type Db = Kysely<Database>;
 
 export async function markQuoteSent(
@@ -28,9 +30,18 @@ export async function markQuoteSent(
     const lines = await trx.selectFrom('quote_lines').select(sql<number>`count(*)::int`.as('n')).where('quote_id', '=', q.id).executeTakeFirstOrThrow();
     if (lines.n === 0) throw new AppError('CONFLICT', 'Add at least one line before sending the quote.');
     const expiresAt = expiryFrom(now, q.valid_days);
+    // The turnaround the line's load gives today, stated on the quote as sent.
+    const planLines = await trx
+      .selectFrom('quote_lines as l')
+      .innerJoin('parts as p', 'p.id', 'l.part_id')
+      .innerJoin('finishes as f', 'f.id', 'l.finish_id')
+      .select(['l.finish_id', 'l.quantity', 'p.area_dm2', 'f.parts_per_load'])
+      .where('l.quote_id', '=', q.id)
+      .execute();
+    const turnaround = await quoteTurnaroundDays(planLines.map((l) => ({ finishId: l.finish_id, quantity: l.quantity, partAreaDm2: Number(l.area_dm2), partsPerLoad: l.parts_per_load })), trx);
     await trx
       .updateTable('quotes')
-      .set({ status: 'sent', contact_user_id: input.contactUserId, sent_at: now, expires_at: expiresAt, updated_at: sql`now()` })
+      .set({ status: 'sent', contact_user_id: input.contactUserId, sent_at: now, expires_at: expiresAt, turnaround_days: turnaround, updated_at: sql`now()` })
       .where('id', '=', q.id)
       .execute();
     await trx.insertInto('audit_log').values({ actor_id: actor.id, action: 'quote.send', entity: 'quote', entity_id: q.id, detail: JSON.stringify({ to: input.contactUserId }) }).execute();

@@ -127,7 +127,7 @@ function quoteHeader(conn: Db) {
     .select([
       'q.id', 'q.number', 'q.revision', 'q.customer_id', 'q.contact_user_id', 'q.status', 'q.valid_days', 'q.is_rush', 'q.notes',
       'q.total_cents', 'q.previous_revision_id', sql<Date>`q.created_at`.as('created_at'), 'q.sent_at', 'q.expires_at', 'q.decided_at', 'q.po_number',
-      'q.decline_reason', 'q.created_by',
+      'q.decline_reason', 'q.created_by', 'q.turnaround_days',
       effectiveStatus.as('effective_status'),
       'c.name as customer_name', 'c.code as customer_code', 'c.billing_address', 'c.shipping_address', 'c.payment_terms_days',
       'r.effective_from as rates_from',

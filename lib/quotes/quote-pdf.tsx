@@ -9,11 +9,12 @@ import { formatDay, formatUnitPrice } from './format';
 import { Labelled, PageFooter, pdf, registerPdfFonts, ShopBlock, type ShopHeader } from './pdf-theme';
 import type { QuoteDetail } from './queries';
 import { quoteLabel } from './status';
+import { turnaroundText } from '@/lib/schedule/turnaround';
 
 type PdfQuote = Pick<
   QuoteDetail,
   | 'id' | 'number' | 'revision' | 'customer_name' | 'billing_address' | 'shipping_address' | 'contact_name' | 'creator_name'
-  | 'creator_email' | 'sent_at' | 'created_at' | 'expires_at' | 'valid_days' | 'is_rush' | 'notes' | 'total_cents' | 'payment_terms_days' | 'lines'
+  | 'creator_email' | 'sent_at' | 'created_at' | 'expires_at' | 'valid_days' | 'is_rush' | 'notes' | 'total_cents' | 'payment_terms_days' | 'lines' | 'turnaround_days'
 >;
 
 const COLS = { no: '5%', part: '25%', finish: '32%', qty: '9%', unit: '14%', total: '15%' } as const;
@@ -97,6 +98,7 @@ export function QuoteDocument({ quote, shop }: { quote: PdfQuote; shop: ShopHead
             ? `This quotation is valid until ${formatDay(quote.expires_at)} (${quote.valid_days} days from the date it was sent).`
             : `This quotation is valid for ${quote.valid_days} days from the date it is sent.`}
         </Labelled>
+        {quote.turnaround_days !== null ? <Labelled label="Turnaround" style={pdf.section}>{`${turnaroundText(quote.turnaround_days)}.`}</Labelled> : null}
         <Labelled label="Terms" style={pdf.section}>
           <Text>Payment: net {quote.payment_terms_days} days from invoice. Prices cover the finish and specification stated on each line.</Text>
           <Text>Thickness is measured on significant surfaces as the cited specification defines them. Parts should arrive free of paint, heavy scale and heavy oil; extra cleaning or stripping is quoted separately.</Text>

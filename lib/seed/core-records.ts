@@ -159,6 +159,23 @@ export const DEMO_PART_TOLERANCES = [
   { part_number: 'HV-ACT-6061', size_tolerance_um: 50 },
 ] as const;
 
+/**
+ * What each process tank runs in a day (invented for the demo shop): one load's cycle in minutes,
+ * the work area a rack or barrel load carries, the manned shifts and their length.
+ */
+export const DEMO_TANK_CAPACITY: Record<string, { cycle_minutes: number; load_area_dm2: number; shifts_per_day: number; shift_hours: number }> = {
+  'N-CU1': { cycle_minutes: 40, load_area_dm2: 60, shifts_per_day: 2, shift_hours: 8 },
+  'N-NI1': { cycle_minutes: 75, load_area_dm2: 60, shifts_per_day: 2, shift_hours: 8 },
+  'Z-ZN1': { cycle_minutes: 60, load_area_dm2: 120, shifts_per_day: 2, shift_hours: 8 },
+  'P-AG1': { cycle_minutes: 30, load_area_dm2: 10, shifts_per_day: 1, shift_hours: 8 },
+  'P-AU1': { cycle_minutes: 30, load_area_dm2: 4, shifts_per_day: 1, shift_hours: 8 },
+  'P-SN1': { cycle_minutes: 30, load_area_dm2: 15, shifts_per_day: 1, shift_hours: 8 },
+  'E-EN1': { cycle_minutes: 120, load_area_dm2: 40, shifts_per_day: 2, shift_hours: 8 },
+  'A-AN1': { cycle_minutes: 60, load_area_dm2: 50, shifts_per_day: 2, shift_hours: 8 },
+  'A-HC1': { cycle_minutes: 120, load_area_dm2: 30, shifts_per_day: 1, shift_hours: 8 },
+  'P-NT1': { cycle_minutes: 45, load_area_dm2: 80, shifts_per_day: 1, shift_hours: 8 },
+};
+
 export async function seedCoreRecords(db: Kysely<Database>): Promise<void> {
   for (const l of DEMO_LINES) {
     await db.insertInto('lines').values(l).onConflict((oc) => oc.column('name').doUpdateSet({ method: l.method, description: l.description })).execute();
@@ -179,6 +196,9 @@ export async function seedCoreRecords(db: Kysely<Database>): Promise<void> {
         oc.column('code').doUpdateSet({ ...values, made_up_at: sql`coalesce(tanks.made_up_at, excluded.made_up_at)`, family_settings: sql`case when tanks.family_settings = '{}'::jsonb then excluded.family_settings else tanks.family_settings end` }),
       )
       .execute();
+  }
+  for (const [code, capacity] of Object.entries(DEMO_TANK_CAPACITY)) {
+    await db.updateTable('tanks').set(capacity).where('code', '=', code).execute();
   }
   for (const f of DEMO_FINISHES) {
     const values = { ...f, process_route: JSON.stringify(f.process_route) };

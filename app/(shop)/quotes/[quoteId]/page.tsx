@@ -1,4 +1,5 @@
 import type { Metadata } from 'next';
+import { turnaroundText } from '@/lib/schedule/turnaround';
 import Link from 'next/link';
 import { notFound } from 'next/navigation';
 import { Money } from '@/components/money';
@@ -51,7 +52,7 @@ export default async function QuotePage({ params, searchParams }: { params: Prom
             {quote.is_rush ? <Badge tone="copper">Rush</Badge> : null}
           </>
         }
-        description={`${quote.customer_name} · ${quote.lines.length} line${quote.lines.length === 1 ? '' : 's'}`}
+        description={[`${quote.customer_name} · ${quote.lines.length} line${quote.lines.length === 1 ? '' : 's'}`, turnaroundText(quote.turnaround_days)].filter(Boolean).join(' · ')}
         actions={
           <>
             <a className={buttonClasses({ variant: 'secondary' })} href={`/api/quotes/${quote.id}/pdf`} target="_blank" rel="noopener">

@@ -8,6 +8,7 @@ import { requirePageUser } from '@/lib/auth/current-user';
 import { formatWeight } from '@/lib/dock/packing-slip-pdf';
 import { getPortalOrder } from '@/lib/dock/queries';
 import { DISCREPANCY_SHORT } from '@/lib/dock/schemas';
+import { plannedDatesOf } from '@/lib/schedule/queries';
 import { STATE_LABELS } from '@/lib/orders/states';
 import { formatDateTime, formatDay } from '@/lib/quotes/format';
 
@@ -19,6 +20,7 @@ export default async function PortalOrderPage({ params }: { params: Promise<{ wo
   const user = await requirePageUser('portal.use', `/portal/orders/${workOrderId}`);
   const o = user.customerId ? await getPortalOrder(user.customerId, workOrderId) : null;
   if (!o) notFound();
+  const planned = (await plannedDatesOf([o.id])).get(o.id);
   const firstIn = o.receipts[0]?.received_at ?? null;
   const lastOut = o.shipments.at(-1)?.shipped_at ?? null;
   const n = (v: number) => v.toLocaleString('en-US');
@@ -37,6 +39,8 @@ export default async function PortalOrderPage({ params }: { params: Promise<{ wo
           <dd>{firstIn ? formatDateTime(firstIn) : 'Not yet'}</dd>
           <dt className="text-ink-muted">Promised</dt>
           <dd>{formatDay(o.due_date)}</dd>
+          <dt className="text-ink-muted">Planned on the line</dt>
+          <dd>{planned?.finish ? (planned.start === planned.finish ? formatDay(planned.finish) : `${formatDay(planned.start)} to ${formatDay(planned.finish)}`) : o.state === 'accepted' || o.state === 'received' || o.state === 'in_process' ? 'Not planned yet' : 'Done'}</dd>
           <dt className="text-ink-muted">Shipped</dt>
           <dd>{lastOut ? `${formatDateTime(lastOut)}${o.state === 'shipped' || o.state === 'invoiced' ? '' : ' (part of the order)'}` : 'Not yet'}</dd>
           <dt className="text-ink-muted">Counts</dt>

@@ -1,4 +1,5 @@
 import type { Metadata } from 'next';
+import { turnaroundText } from '@/lib/schedule/turnaround';
 import Link from 'next/link';
 import { notFound } from 'next/navigation';
 import { Money } from '@/components/money';
@@ -33,7 +34,7 @@ export default async function PortalQuotePage({ params, searchParams }: { params
         eyebrow={<Link href="/portal/quotes">Quotes</Link>}
         title={<span className="font-mono">{quoteLabel(quote)}</span>}
         meta={<PortalQuoteStatus status={status} />}
-        description={quote.expires_at ? `Valid until ${formatDay(quote.expires_at)}` : undefined}
+        description={[quote.expires_at ? `Valid until ${formatDay(quote.expires_at)}` : null, turnaroundText(quote.turnaround_days)].filter(Boolean).join(' · ') || undefined}
         actions={
           <a className={buttonClasses({ variant: 'secondary' })} href={`/api/portal/quotes/${quote.id}/pdf`} target="_blank" rel="noopener">
             Download PDF
