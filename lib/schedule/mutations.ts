@@ -6,7 +6,7 @@ import { db as defaultDb } from '@/db';
 import type { Database } from '@/db/types';
 import { AppError } from '@/lib/errors';
 import { assertCan, type Actor } from '@/lib/quotes/access';
-import { HORIZON_DAYS, loadLineInput, PLANNED_STATES, shopToday } from './queries';
+import { finishTanksOf, HORIZON_DAYS, PLANNED_STATES, shopToday } from './queries';
 import { workingDays } from './plan';
 import type { CapacityInput, PlacementInput } from './schemas';
 
@@ -23,7 +23,8 @@ export async function placeJob(actor: ScheduleActor, input: PlacementInput, conn
     const wo = await trx.selectFrom('work_orders').select(['id', 'number', 'state', 'finish_id']).where('id', '=', input.workOrderId).forUpdate().executeTakeFirst();
     if (!wo) throw new AppError('NOT_FOUND', 'That work order does not exist.');
     if (!(PLANNED_STATES as readonly string[]).includes(wo.state)) throw new AppError('CONFLICT', `Work order ${wo.number} has run; there is nothing left to plan.`);
-    const { finishTanks } = await loadLineInput(trx, { today, days: 1 });
+    // Only the tanks and their finishes: placing one job reads no other order.
+    const finishTanks = await finishTanksOf(trx);
     if (!(finishTanks.get(wo.finish_id) ?? []).includes(input.tankId)) {
       throw new AppError('BAD_INPUT', 'That tank does not run this job\u2019s finish. Choose a tank of the same finish.', { tankId: ['That tank does not run this job\u2019s finish.'] });
     }

@@ -54,6 +54,11 @@ async function loadTanksAndFinishes(conn: Db) {
   return { tanks, finishTanks, finishes };
 }
 
+/** For each active finish, the tanks that run it (preferred first). */
+export async function finishTanksOf(conn: Db = defaultDb): Promise<Map<string, string[]>> {
+  return (await loadTanksAndFinishes(conn)).finishTanks;
+}
+
 /** Everything the planner reads, for the working days from today on. */
 export async function loadLineInput(conn: Db = defaultDb, opts: { today?: string; days?: number } = {}): Promise<LineInput> {
   const today = opts.today ?? shopToday();
