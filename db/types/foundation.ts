@@ -34,6 +34,8 @@ export type UsersTable = {
   totp_secret: string | null;
   totp_enabled_at: TimestampNullable;
   totp_last_step: number | null;
+  // 2026_12_04_1245_api_tokens: a customer contact who may make API tokens for their company
+  is_customer_admin: Generated<boolean>;
 };
 
 export type SessionsTable = {
@@ -96,6 +98,24 @@ export type AuditLogTable = {
   created_at: GeneratedTimestamp;
 };
 
+// 2026_12_04_1245_api_tokens
+export type ApiTokensTable = {
+  id: Generated<string>;
+  name: string;
+  token_hash: string;
+  prefix: string;
+  role: Role;
+  customer_id: string | null;
+  user_id: string;
+  per_minute: Generated<number>;
+  created_at: GeneratedTimestamp;
+  last_used_at: TimestampNullable;
+  revoked_at: TimestampNullable;
+  revoked_by: string | null;
+};
+
+export type ApiRateWindowsTable = { token_id: string; window_start: Timestamp; requests: number };
+
 export type SettingsTable = { key: string; value: Json<unknown>; updated_at: GeneratedTimestamp };
 
 export type FoundationTables = {
@@ -110,6 +130,8 @@ export type FoundationTables = {
   emails: EmailsTable;
   audit_log: AuditLogTable;
   settings: SettingsTable;
+  api_tokens: ApiTokensTable;
+  api_rate_windows: ApiRateWindowsTable;
 };
 
 export type Customer = Selectable<CustomersTable>;

@@ -17,7 +17,7 @@ import { addQuoteLine, createQuote } from '@/lib/quotes/mutations';
 import { quoteLabel } from '@/lib/quotes/status';
 import { actionRequest } from '../helpers/actions';
 import { APP_URL } from '../helpers/browser';
-import { discoverActions, discoverApiRoutes, discoverPages, type Guard } from '../helpers/routes';
+import { discoverActions, discoverApiRoutes, discoverPages, type Guard, guardAllows } from '../helpers/routes';
 import { makeOrder } from '../integration/billing/fixtures';
 import { actorFor, createLot, inspect, passingReadings, PLATER, SUPERVISOR } from '../integration/quality/fixtures';
 import { finishId, staff, suffix } from '../integration/quotes/fixtures';
@@ -99,7 +99,7 @@ const sessionIds: string[] = [];
 // --- what a customer can reach, from the code and the build -------------------------------------
 
 const DIST = process.env.NEXT_DIST_DIR ?? '.next-test';
-const customerMay = (g: Guard) => g.kind === 'permission' && roleCan('customer', g.permission as Permission);
+const customerMay = (g: Guard) => guardAllows(g, (p) => roleCan('customer', p as Permission));
 const SEGMENT = /\[\[?(?:\.\.\.)?([A-Za-z]+)\]?\]/g; // [id], [...id], [[...id]]
 const paramsOf = (pattern: string) => [...pattern.matchAll(SEGMENT)].map((m) => m[1]!);
 const fill = (pattern: string, values: Record<string, string>) => pattern.replace(SEGMENT, (_m, name: string) => values[name] ?? `[${name}]`);

@@ -6,7 +6,17 @@ import path from 'node:path';
 export const ROOT = path.resolve(__dirname, '../..');
 const APP = path.join(ROOT, 'app');
 
-export type Guard = { kind: 'permission'; permission: string } | { kind: 'public' } | { kind: 'unguarded' };
+/** `anyOf`: the permissions any one of which lets a caller in (a page or action asks for one). */
+export type Guard = { kind: 'permission'; permission: string; anyOf: string[] } | { kind: 'public' } | { kind: 'unguarded' };
+
+function permissionGuard(anyOf: string[]): Guard {
+  return { kind: 'permission', permission: anyOf[0]!, anyOf };
+}
+
+/** Whether a role gets past a guard (roleCan over any of its permissions). */
+export function guardAllows(guard: Guard, allows: (permission: string) => boolean): boolean {
+  return guard.kind === 'permission' && guard.anyOf.some(allows);
+}
 export type PageRoute = { file: string; pattern: string; guard: Guard };
 export type ApiRoute = { file: string; pattern: string; method: string; guard: Guard };
 export type ActionRoute = { id: string; file: string; name: string; pagePattern: string; guard: Guard };
@@ -34,7 +44,7 @@ export function discoverPages(): PageRoute[] {
     .map((file) => {
       const src = readFileSync(file, 'utf8');
       const m = src.match(PERMISSION_CALL);
-      return { file: path.relative(ROOT, file), pattern: urlPattern(path.relative(APP, path.dirname(file))), guard: m ? { kind: 'permission', permission: m[1]! } : { kind: 'unguarded' } };
+      return { file: path.relative(ROOT, file), pattern: urlPattern(path.relative(APP, path.dirname(file))), guard: m ? permissionGuard([m[1]!]) : { kind: 'unguarded' } };
     });
 }
 
@@ -45,8 +55,10 @@ export function discoverApiRoutes(): ApiRoute[] {
     const pattern = urlPattern(path.relative(APP, path.dirname(file)));
     for (const m of src.matchAll(/export\s+(?:const|async function|function)\s+(GET|POST|PUT|PATCH|DELETE)\b/g)) {
       const method = m[1]!;
-      const wrapped = src.match(new RegExp(`export\\s+const\\s+${method}\\s*=\\s*withPermission(?:<[^>]*>)?\\(\\s*'([a-z.]+)'`));
-      out.push({ file: path.relative(ROOT, file), pattern, method, guard: wrapped ? { kind: 'permission', permission: wrapped[1]! } : { kind: 'unguarded' } });
+      // withPermission('p', …) or apiRoute('p' | ['p', 'q'], …)
+      const wrapped = src.match(new RegExp(`export\\s+const\\s+${method}\\s*=\\s*(?:withPermission|apiRoute)(?:<[^>]*>)?\\(\\s*(?:'([a-z.]+)'|\\[([^\\]]*)\\])`));
+      const anyOf = wrapped ? (wrapped[1] ? [wrapped[1]] : [...wrapped[2]!.matchAll(/'([a-z.]+)'/g)].map((x) => x[1]!)) : [];
+      out.push({ file: path.relative(ROOT, file), pattern, method, guard: anyOf.length ? permissionGuard(anyOf) : { kind: 'unguarded' } });
     }
   }
   return out;
@@ -68,7 +80,7 @@ export function discoverActions(distDir: string): ActionRoute[] {
       file: e.filename,
       name: e.exportedName,
       pagePattern: urlPattern(worker.replace(/^app\//, '').replace(/\/(page|route)$/, '')),
-      guard: guarded ? { kind: 'permission', permission: guarded[1]! } : isPublic ? { kind: 'public' } : { kind: 'unguarded' },
+      guard: guarded ? permissionGuard([guarded[1]!]) : isPublic ? { kind: 'public' } : { kind: 'unguarded' },
     };
   });
 }
