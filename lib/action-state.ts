@@ -7,6 +7,8 @@ export type FormState = {
   values?: Record<string, string>;
   // Recovery codes of a second factor, shown once when they are made.
   codes?: string[];
+  // A new API token, shown once when it is made.
+  secret?: string;
 };
 
 export const initialFormState: FormState = {};

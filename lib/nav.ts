@@ -25,6 +25,7 @@ export const STAFF_NAV: NavItem[] = [
   { href: '/settings/users', label: 'Users', permission: 'users.manage' },
   { href: '/settings/rates', label: 'Rates', permission: 'rates.manage' },
   { href: '/settings/passivation', label: 'Passivation windows', permission: 'bath.limits' },
+  { href: '/settings/api-tokens', label: 'API tokens', permission: 'settings.manage' },
   { href: '/settings/mailbox', label: 'Demo mailbox', permission: 'mailbox.read' },
 ];
 
@@ -34,6 +35,7 @@ export const CUSTOMER_NAV: NavItem[] = [
   { href: '/portal/orders', label: 'Orders', permission: 'portal.use' },
   { href: '/portal/certificates', label: 'Certificates', permission: 'portal.use' },
   { href: '/portal/invoices', label: 'Invoices', permission: 'portal.use' },
+  { href: '/portal/api-tokens', label: 'API tokens', permission: 'api.tokens' },
 ];
 
 export function navFor(role: Role, items: NavItem[], opts: { demoMode: boolean }): { href: string; label: string; badge?: NavBadge }[] {

@@ -128,7 +128,7 @@ export async function inviteUser(actor: SessionUser, input: InviteInput): Promis
   return { userId };
 }
 
-export async function updateUser(actor: SessionUser, userId: string, role: Role, isActive: boolean): Promise<void> {
+export async function updateUser(actor: SessionUser, userId: string, role: Role, isActive: boolean, isCustomerAdmin = false): Promise<void> {
   if (userId === actor.id && (role !== actor.role || !isActive)) {
     throw new AppError('CONFLICT', 'You cannot change your own role or deactivate yourself. Ask another owner.');
   }
@@ -138,8 +138,8 @@ export async function updateUser(actor: SessionUser, userId: string, role: Role,
     if ((u.role === 'customer') !== (role === 'customer')) {
       throw new AppError('CONFLICT', 'A customer contact cannot become staff, nor staff a customer contact. Invite a new user instead.');
     }
-    await trx.updateTable('users').set({ role, is_active: isActive, updated_at: sql`now()` }).where('id', '=', userId).execute();
+    await trx.updateTable('users').set({ role, is_active: isActive, is_customer_admin: role === 'customer' && isCustomerAdmin, updated_at: sql`now()` }).where('id', '=', userId).execute();
     if (!isActive) await trx.deleteFrom('sessions').where('user_id', '=', userId).execute();
-    await trx.insertInto('audit_log').values({ actor_id: actor.id, action: 'user.update', entity: 'user', entity_id: userId, detail: JSON.stringify({ role, isActive }) }).execute();
+    await trx.insertInto('audit_log').values({ actor_id: actor.id, action: 'user.update', entity: 'user', entity_id: userId, detail: JSON.stringify({ role, isActive, isCustomerAdmin: role === 'customer' && isCustomerAdmin }) }).execute();
   });
 }

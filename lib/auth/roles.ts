@@ -50,6 +50,8 @@ export const PERMISSIONS = {
   'invoices.issue': ['owner'],
   'reports.read': ['owner'],
   'portal.use': ['customer'],
+  // A customer's API tokens page; lib/api/tokens.ts lets only their company's administrator in.
+  'api.tokens': ['customer'],
 } as const satisfies Record<string, readonly Role[]>;
 
 export type Permission = keyof typeof PERMISSIONS;

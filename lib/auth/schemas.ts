@@ -45,6 +45,8 @@ export const updateUserSchema = z.object({
   userId: z.string().min(1).max(100),
   role: z.enum(ROLES, { error: 'Choose a role.' }),
   isActive: z.preprocess((v) => v === 'on' || v === 'true' || v === true, z.boolean()),
+  // A customer contact who may make API tokens for their company.
+  isCustomerAdmin: z.preprocess((v) => v === 'on' || v === 'true' || v === true, z.boolean()),
 });
 
 export const unitSystemSchema = z.object({ unitSystem: z.enum(['metric', 'us'], { error: 'Choose metric or US units.' }) });

@@ -45,12 +45,12 @@ export const DEMO_CUSTOMERS = [
   },
 ] as const;
 
-export const DEMO_USERS: { email: string; name: string; role: Role; customerCode?: string }[] = [
+export const DEMO_USERS: { email: string; name: string; role: Role; customerCode?: string; isCustomerAdmin?: boolean }[] = [
   { email: 'owner@kestrel-plating.test', name: 'Dana Whitfield', role: 'owner' },
   { email: 'estimator@kestrel-plating.test', name: 'Marcus Bell', role: 'estimator' },
   { email: 'plater@kestrel-plating.test', name: 'Rosa Delgado', role: 'plater' },
   { email: 'supervisor@kestrel-plating.test', name: 'Priya Natarajan', role: 'supervisor' },
-  { email: 'buyer@northgate-fastener.test', name: 'Glen Okafor', role: 'customer', customerCode: 'NGF' },
+  { email: 'buyer@northgate-fastener.test', name: 'Glen Okafor', role: 'customer', customerCode: 'NGF', isCustomerAdmin: true },
   { email: 'quality@halvorsen-valve.test', name: 'Ingrid Sorensen', role: 'customer', customerCode: 'HVI' },
 ];
 
@@ -83,9 +83,10 @@ export async function seedFoundation(db: Kysely<Database>): Promise<void> {
         role: u.role,
         customer_id: u.customerCode ? byCode.get(u.customerCode) ?? null : null,
         password_hash: passwordHash,
+        is_customer_admin: u.isCustomerAdmin ?? false,
       })
       // Re-seeding restores the demo password and role, so the printed sign-ins always work.
-      .onConflict((oc) => oc.column('email').doUpdateSet({ password_hash: passwordHash, role: u.role, is_active: true }))
+      .onConflict((oc) => oc.column('email').doUpdateSet({ password_hash: passwordHash, role: u.role, is_active: true, is_customer_admin: u.isCustomerAdmin ?? false }))
       .execute();
   }
   // The owner must have a second factor; the demo owner's is this published key (README), whose

@@ -5,7 +5,7 @@ export async function findUsers() {
   return db
     .selectFrom('users as u')
     .leftJoin('customers as c', 'c.id', 'u.customer_id')
-    .select(['u.id', 'u.email', 'u.name', 'u.role', 'u.is_active', 'u.created_at', 'c.name as customer_name'])
+    .select(['u.id', 'u.email', 'u.name', 'u.role', 'u.is_active', 'u.is_customer_admin', 'u.created_at', 'c.name as customer_name'])
     .select((eb) => eb('u.password_hash', 'is not', null).as('has_password'))
     .orderBy('u.role')
     .orderBy('u.name')

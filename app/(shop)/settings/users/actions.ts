@@ -12,7 +12,7 @@ export const inviteUserAction = formAction('users.manage', inviteSchema, async (
 });
 
 export const updateUserAction = formAction('users.manage', updateUserSchema, async (input, actor) => {
-  await updateUser(actor, input.userId, input.role, input.isActive);
+  await updateUser(actor, input.userId, input.role, input.isActive, input.isCustomerAdmin);
   revalidatePath('/settings/users');
   return { ok: true, message: 'Saved.' };
 });

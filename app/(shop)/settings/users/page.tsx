@@ -47,7 +47,7 @@ export default async function UsersPage() {
                     {u.customer_name ? <div className="text-xs text-ink-muted">{u.customer_name}</div> : null}
                   </td>
                   <td className="px-4 py-2">
-                    <UserRowForm userId={u.id} role={u.role} isActive={u.is_active} isSelf={u.id === me.id} />
+                    <UserRowForm userId={u.id} role={u.role} isActive={u.is_active} isCustomerAdmin={u.is_customer_admin} isSelf={u.id === me.id} />
                   </td>
                 </tr>
               ))}

@@ -8,7 +8,7 @@ import type { Role } from '@/db/types';
 import { updateUserAction } from './actions';
 
 // One user's role and active flag, saved on its own so a mistake touches one row only.
-export function UserRowForm({ userId, role, isActive, isSelf }: { userId: string; role: Role; isActive: boolean; isSelf: boolean }) {
+export function UserRowForm({ userId, role, isActive, isCustomerAdmin, isSelf }: { userId: string; role: Role; isActive: boolean; isCustomerAdmin: boolean; isSelf: boolean }) {
   const [state, action] = useActionState(updateUserAction, initialFormState);
   return (
     <form action={action} className="flex flex-wrap items-center gap-2">
@@ -27,6 +27,11 @@ export function UserRowForm({ userId, role, isActive, isSelf }: { userId: string
       <label className="flex items-center gap-1 text-sm">
         <input type="checkbox" name="isActive" defaultChecked={isActive} disabled={isSelf} /> Active
       </label>
+      {role === 'customer' ? (
+        <label className="flex items-center gap-1 text-sm" title="May make and revoke API tokens for their company">
+          <input type="checkbox" name="isCustomerAdmin" defaultChecked={isCustomerAdmin} /> Company administrator
+        </label>
+      ) : null}
       {isSelf ? null : (
         <SubmitButton size="sm" variant="secondary">
           Save
