@@ -6,10 +6,13 @@ import type { Browser, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { db } from '@/db';
 import { DEMO_PASSWORD } from '@/lib/seed';
+import { isoDate } from '@/lib/billing/dates';
+import { formatDay } from '@/lib/quotes/format';
 import { APP_URL, launchBrowser, screenshot, signInAs } from '../helpers/browser';
 import { waitForMessage } from '../helpers/mailbox';
 
 const PLATER = 'plater@kestrel-plating.test';
+const SUPERVISOR = 'supervisor@kestrel-plating.test';
 const BUYER = 'buyer@northgate-fastener.test';
 const STRANGER = 'quality@halvorsen-valve.test';
 // A 1×1 PNG (PNG spec §5.2 signature, IHDR, IDAT, IEND).
@@ -75,6 +78,41 @@ describe('dock to dock', () => {
     const mail = await waitForMessage(BUYER, new RegExp(`Receiving discrepancy on PO ${po}: short`), since);
     expect(mail.text).toContain('180 counted, second carton light.');
     expect(mail.text).toContain('Counted: 180 parts in 2 container(s), 1.8 kg (4 lb); ordered 200.');
+  });
+
+  let plannedDay = '';
+  it('[supervisor] finds the received order on the schedule and drags it to another day; the customer sees that day', async () => {
+    await as(SUPERVISOR, 'schedule', async (page) => {
+      await page.goto(`${APP_URL}/schedule`);
+      const number = (await db.selectFrom('work_orders').select('number').where('id', '=', workOrderId).executeTakeFirstOrThrow()).number;
+      const chip = page.getByRole('button', { name: new RegExp(number) });
+      await chip.waitFor();
+      const from = await chip.locator('xpath=ancestor::td[1]').getAttribute('data-cell');
+      const [tank, day] = from!.split(' ');
+      // The next working day shown on the same tank's row.
+      const cells = await page.locator(`td[data-cell^="${tank} "]`).evaluateAll((tds) => tds.map((td) => td.getAttribute('data-cell')!));
+      const target = cells[cells.indexOf(from!) + 1]!;
+      plannedDay = target.split(' ')[1]!;
+      expect(plannedDay > day!).toBe(true);
+      // A real drag: press on the chip, move over the other day's cell (twice, so the browser
+      // fires dragover there), release.
+      const cell = page.locator(`td[data-cell="${target}"]`);
+      await chip.hover();
+      await page.mouse.down();
+      await cell.hover({ position: { x: 20, y: 10 } });
+      await cell.hover({ position: { x: 24, y: 14 } });
+      await page.mouse.up();
+      await page.getByText(`Placed on ${formatDay(plannedDay)}.`, { exact: false }).waitFor();
+      await page.locator(`td[data-cell="${target}"]`).getByRole('button', { name: new RegExp(`${number}.*placed`) }).waitFor();
+      await screenshot(page, 'dock-schedule-placed');
+    });
+    const placed = await db.selectFrom('schedule_placements').select(['day']).where('work_order_id', '=', workOrderId).executeTakeFirstOrThrow();
+    expect(isoDate(placed.day)).toBe(plannedDay);
+    await as(BUYER, 'portal-planned', async (page) => {
+      await page.goto(`${APP_URL}/portal/orders/${workOrderId}`);
+      await page.getByRole('heading', { name: 'Dates' }).waitFor();
+      await page.getByText(formatDay(plannedDay), { exact: false }).first().waitFor();
+    });
   });
 
   it('[plater] ships the inspected lot in two parts, each with its packing slip', async () => {

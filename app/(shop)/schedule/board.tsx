@@ -2,7 +2,7 @@
 // The line's plan as a board: a row per tank, a column per working day, a chip per job's loads.
 // A supervisor moves a job by dragging its chip to another day or tank of the same finish, or,
 // without a mouse, by choosing the chip and then "Place here" in a cell.
-import { useState, useTransition } from 'react';
+import { useMemo, useState, useTransition } from 'react';
 import { FormMessage } from '@/components/ui/form-message';
 import { cx } from '@/components/ui/cx';
 import type { FormState } from '@/lib/action-state';
@@ -30,6 +30,8 @@ export function ScheduleBoard({ days, tanks, cells, canPlan }: { days: BoardDay[
   };
   const place = (chip: BoardChip, tankId: string, day: string) => send(placeJobAction, { workOrderId: chip.jobId, tankId, day });
   const accepts = (tank: BoardTank) => moving !== null && tank.finishIds.includes(moving.finishId);
+  // A drop names its chip in the drag data, so it does not depend on the render after dragstart.
+  const chipsById = useMemo(() => new Map(Object.values(cells).flatMap((c) => c.chips.map((chip) => [chip.jobId, chip] as const))), [cells]);
 
   return (
     <div className="flex flex-col gap-2">
@@ -84,11 +86,17 @@ export function ScheduleBoard({ days, tanks, cells, canPlan }: { days: BoardDay[
                       data-cell={`${t.code} ${d.day}`}
                       className={cx('p-1.5', cell?.overloaded && 'bg-out-soft', moving && !ok && 'opacity-40')}
                       onDragOver={(e) => {
-                        if (canPlan && ok) e.preventDefault();
+                        if (canPlan) e.preventDefault();
                       }}
                       onDrop={(e) => {
                         e.preventDefault();
-                        if (moving && ok) place(moving, t.id, d.day);
+                        const chip = chipsById.get(e.dataTransfer.getData('text/plain')) ?? moving;
+                        if (!chip) return;
+                        if (t.finishIds.includes(chip.finishId)) place(chip, t.id, d.day);
+                        else {
+                          setMoving(null);
+                          setState({ ok: false, message: `${t.code} does not run ${chip.finishCode}: drop ${chip.number} on a tank of its finish.` });
+                        }
                       }}
                     >
                       <div className={cx('mb-1 text-xs', cell?.overloaded ? 'font-semibold text-out' : 'text-ink-muted')}>
@@ -106,7 +114,8 @@ export function ScheduleBoard({ days, tanks, cells, canPlan }: { days: BoardDay[
                               onDragStart={(e) => {
                                 e.dataTransfer.setData('text/plain', c.jobId);
                                 e.dataTransfer.effectAllowed = 'move';
-                                setMoving(c);
+                                // Chromium ends a drag whose source changes during dragstart: mark it after.
+                                setTimeout(() => setMoving(c), 0);
                               }}
                               onClick={() => setMoving(moving?.jobId === c.jobId ? null : c)}
                               aria-pressed={moving?.jobId === c.jobId}
