@@ -26,6 +26,8 @@ export type TokenView = {
 /** The owner chooses role and customer; a customer's administrator makes tokens for their company. */
 export function TokenPanel({ tokens, customers }: { tokens: TokenView[]; customers: { id: string; name: string }[] | null }) {
   const [state, action] = useActionState(createTokenAction, initialFormState);
+  // One revoke state for the table: the revoked row turns into a badge, so its message lives above it.
+  const [revoked, revoke] = useActionState(revokeTokenAction, initialFormState);
   const [role, setRole] = useState(customers ? 'plater' : 'customer');
   return (
     <div className="flex flex-col gap-6">
@@ -58,6 +60,7 @@ export function TokenPanel({ tokens, customers }: { tokens: TokenView[]; custome
         </form>
       </Card>
       <Card title="Tokens" padding="none">
+        <FormMessage className="m-4" tone={revoked.ok ? 'success' : 'error'} message={revoked.message} />
         {tokens.length === 0 ? (
           <p className="p-4 text-sm text-ink-muted">No tokens yet.</p>
         ) : (
@@ -88,7 +91,7 @@ export function TokenPanel({ tokens, customers }: { tokens: TokenView[]; custome
                       <div className="text-xs text-ink-muted">by {t.madeBy}</div>
                     </td>
                     <td className="px-4 py-2">{t.lastUsed ?? 'never'}</td>
-                    <td className="px-4 py-2">{t.revoked ? <Badge tone="neutral">revoked {t.revoked}</Badge> : <RevokeForm tokenId={t.id} name={t.name} />}</td>
+                    <td className="px-4 py-2">{t.revoked ? <Badge tone="neutral">revoked {t.revoked}</Badge> : <RevokeForm tokenId={t.id} name={t.name} action={revoke} />}</td>
                   </tr>
                 ))}
               </tbody>
@@ -100,17 +103,13 @@ export function TokenPanel({ tokens, customers }: { tokens: TokenView[]; custome
   );
 }
 
-function RevokeForm({ tokenId, name }: { tokenId: string; name: string }) {
-  const [state, action] = useActionState(revokeTokenAction, initialFormState);
+function RevokeForm({ tokenId, name, action }: { tokenId: string; name: string; action: (form: FormData) => void }) {
   return (
     <form action={action} className="flex items-center gap-2">
       <input type="hidden" name="tokenId" value={tokenId} />
       <SubmitButton size="sm" variant="secondary" aria-label={`Revoke ${name}`}>
         Revoke
       </SubmitButton>
-      <span aria-live="polite" className={state.ok ? 'text-xs text-ok' : 'text-xs text-out'}>
-        {state.message}
-      </span>
     </form>
   );
 }
