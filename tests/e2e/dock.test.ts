@@ -105,6 +105,10 @@ describe('dock to dock', () => {
       await page.getByText(`Placed on ${formatDay(plannedDay)}.`, { exact: false }).waitFor();
       await page.locator(`td[data-cell="${target}"]`).getByRole('button', { name: new RegExp(`${number}.*placed`) }).waitFor();
       await screenshot(page, 'dock-schedule-placed');
+      // The order's own page says the same day, linked to the schedule.
+      await page.goto(`${APP_URL}/work-orders/${workOrderId}`);
+      const row = page.locator('dt', { hasText: 'Planned on the line' }).locator('xpath=following-sibling::dd[1]');
+      expect(await row.getByRole('link').textContent()).toContain(formatDay(plannedDay));
     });
     const placed = await db.selectFrom('schedule_placements').select(['day']).where('work_order_id', '=', workOrderId).executeTakeFirstOrThrow();
     expect(isoDate(placed.day)).toBe(plannedDay);

@@ -19,6 +19,8 @@ import { nextState, STATE_LABELS, WORK_ORDER_STATES } from '@/lib/orders/states'
 import { formatNumber, formatStoredQuantity } from '@/lib/plating';
 import { BASIS_LABELS } from '@/lib/quotes/basis';
 import { formatDateTime, formatDay, formatUnitPrice } from '@/lib/quotes/format';
+import { plannedDatesOf } from '@/lib/schedule/queries';
+import { plannedText } from '@/lib/schedule/turnaround';
 import { findCountMoves, findReceipts, findReworkOrders, findShipments } from '@/lib/dock/queries';
 import { DockCard } from './dock-card';
 import { DueDateForm } from './due-date-form';
@@ -36,7 +38,7 @@ export default async function WorkOrderPage({ params }: { params: Promise<{ work
   const wo = UUID.test(workOrderId) ? await getWorkOrder(workOrderId) : null;
   if (!wo) notFound();
   const bathHazards = (await bathHazardsByFinish([wo.finish_id])).get(wo.finish_id);
-  const [events, runs, cost, receipts, shipments, moves, rework] = await Promise.all([
+  const [events, runs, cost, receipts, shipments, moves, rework, plannedMap] = await Promise.all([
     findWorkOrderEvents(wo.id),
     findPlatingRuns(wo.id),
     can(user, 'reports.read') ? getJobCost(wo.id) : null,
@@ -44,7 +46,9 @@ export default async function WorkOrderPage({ params }: { params: Promise<{ work
     findShipments(wo.id),
     findCountMoves(wo.id),
     findReworkOrders(wo.id),
+    plannedDatesOf([wo.id]),
   ]);
+  const planned = plannedMap.get(wo.id);
   const next = nextState(wo.state, wo.bake_required);
   const family = getFamily(wo.family);
   const runsWithCurrent = family.runsWithCurrent;
@@ -110,6 +114,15 @@ export default async function WorkOrderPage({ params }: { params: Promise<{ work
             <dt className="text-ink-muted">Price</dt>
             <dd>
               <Money cents={wo.total_cents} /> ({formatUnitPrice(wo.unit_price_cents)} {BASIS_LABELS[wo.pricing_basis]})
+            </dd>
+            <dt className="text-ink-muted">Planned on the line</dt>
+            <dd>
+              {can(user, 'schedule.read') ? <Link href="/schedule">{plannedText(planned, wo.state, formatDay)}</Link> : plannedText(planned, wo.state, formatDay)}
+              {planned?.isLate ? (
+                <span className="ml-2">
+                  <StatusBadge status="out" label="Misses its promised date" size="sm" />
+                </span>
+              ) : null}
             </dd>
             <dt className="text-ink-muted">Quote</dt>
             <dd>{wo.quote_id ? <Link href={`/quotes/${wo.quote_id}`}>{wo.quote_number} rev {wo.quote_revision}</Link> : '—'}</dd>

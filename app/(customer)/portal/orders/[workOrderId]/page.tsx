@@ -9,6 +9,7 @@ import { formatWeight } from '@/lib/dock/packing-slip-pdf';
 import { getPortalOrder } from '@/lib/dock/queries';
 import { DISCREPANCY_SHORT } from '@/lib/dock/schemas';
 import { plannedDatesOf } from '@/lib/schedule/queries';
+import { plannedText } from '@/lib/schedule/turnaround';
 import { STATE_LABELS } from '@/lib/orders/states';
 import { formatDateTime, formatDay } from '@/lib/quotes/format';
 
@@ -40,7 +41,7 @@ export default async function PortalOrderPage({ params }: { params: Promise<{ wo
           <dt className="text-ink-muted">Promised</dt>
           <dd>{formatDay(o.due_date)}</dd>
           <dt className="text-ink-muted">Planned on the line</dt>
-          <dd>{planned?.finish ? (planned.start === planned.finish ? formatDay(planned.finish) : `${formatDay(planned.start)} to ${formatDay(planned.finish)}`) : o.state === 'accepted' || o.state === 'received' || o.state === 'in_process' ? 'Not planned yet' : 'Done'}</dd>
+          <dd>{plannedText(planned, o.state, formatDay)}</dd>
           <dt className="text-ink-muted">Shipped</dt>
           <dd>{lastOut ? `${formatDateTime(lastOut)}${o.state === 'shipped' || o.state === 'invoiced' ? '' : ' (part of the order)'}` : 'Not yet'}</dd>
           <dt className="text-ink-muted">Counts</dt>
