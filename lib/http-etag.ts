@@ -36,3 +36,13 @@ export function conditionalJsonText(req: Request, body: string, init: { status?:
   if (matches(req.headers.get('if-none-match'), etag)) return new Response(null, { status: 304, headers });
   return new Response(body, { status: init.status ?? 200, headers: { ...headers, 'content-type': 'application/json' } });
 }
+
+/**
+ * 200 with a body made only when needed, or 304, for an answer whose validator is known before its
+ * bytes (a kept list: lib/grid/list-cache.ts).
+ */
+export async function conditionalByValidator(req: Request, etag: string, body: () => Promise<string>): Promise<Response> {
+  const headers = { etag, 'cache-control': CONDITIONAL_CACHE_CONTROL, vary: 'cookie' };
+  if (matches(req.headers.get('if-none-match'), etag)) return new Response(null, { status: 304, headers });
+  return new Response(await body(), { headers: { ...headers, 'content-type': 'application/json' } });
+}

@@ -118,6 +118,14 @@ export type ApiRateWindowsTable = { token_id: string; window_start: Timestamp; r
 
 export type SettingsTable = { key: string; value: Json<unknown>; updated_at: GeneratedTimestamp };
 
+/** One row: the committed changes to the tables the office lists read (lib/grid/list-cache.ts). */
+export type ListDataVersionTable = {
+  id: Generated<boolean>;
+  /** bigint, read as text by pg. */
+  version: Generated<string>;
+  changed_at: GeneratedTimestamp;
+};
+
 export type FoundationTables = {
   customers: CustomersTable;
   users: UsersTable;
@@ -132,6 +140,7 @@ export type FoundationTables = {
   settings: SettingsTable;
   api_tokens: ApiTokensTable;
   api_rate_windows: ApiRateWindowsTable;
+  list_data_version: ListDataVersionTable;
 };
 
 export type Customer = Selectable<CustomersTable>;

@@ -9,12 +9,13 @@ import 'server-only';
 // The select must name each column's value with its column id (for the CSV), and must not use
 // GROUP BY or DISTINCT (the count reuses its FROM and WHERE); wrap such a query as a subquery:
 // `db.selectFrom(grouped.as('t')).selectAll()` with expressions `t.<col>`.
-import { conditionalJson } from '@/lib/http-etag';
+import { conditionalByValidator, conditionalJson } from '@/lib/http-etag';
 import { AppError } from '@/lib/errors';
 import type { Expression, Kysely, SelectQueryBuilder } from 'kysely';
 import { db as defaultDb } from '@/db';
 import { sql } from 'kysely';
 import { contentDisposition, csvLine } from './csv';
+import { keepAnswer, keptAnswer, type ListCache, listCacheEnabled, listDataVersion, listKey } from './list-cache';
 import { encodeCursor, GRID_COUNT_CAP, type GridColumnInfo, type GridCursor, type GridQuery, parseGridQuery } from './query';
 import { afterSql, columnExpr, type GridColumns, type GridSearch, keyExpr, orderSql, whereSql } from './sql';
 
@@ -35,6 +36,12 @@ export type GridOptions<O> = {
   db?: Kysely<any>;
   /** The list's own quick search for one word (see GridSearch), when its searchable columns span tables. */
   search?: GridSearch;
+  /**
+   * Keep answers in this process under the list data's count of changes (lib/grid/list-cache.ts).
+   * Only for a list whose rows and shape are the same for every reader allowed to see it, that reads
+   * only tables the count follows (migration 2026_12_04_1830), with no `mapRow` depending on the reader.
+   */
+  cache?: ListCache;
 };
 
 /**
@@ -189,6 +196,18 @@ export async function gridResponse<DB, TB extends keyof DB, O>(
         'cache-control': 'no-store',
         'x-content-type-options': 'nosniff',
       },
+    });
+  }
+  if (opts.cache && listCacheEnabled()) {
+    // The count is read before the rows, so what is kept under it is never older than it.
+    const { key, etag } = listKey(opts.cache, await listDataVersion(opts.db ?? (defaultDb as Kysely<any>), opts.cache.clock), query);
+    return conditionalByValidator(req, etag, async () => {
+      let body = keptAnswer(key);
+      if (body === undefined) {
+        body = JSON.stringify(await runGridQuery(qb, opts, query));
+        keepAnswer(key, body);
+      }
+      return body;
     });
   }
   const page = await runGridQuery(qb, opts, query);

@@ -3,7 +3,7 @@ import { sql, type Kysely, type SqlBool } from 'kysely';
 import { db as defaultDb } from '@/db';
 import type { Database, ProcessFamilyId, ProcessStep } from '@/db/types';
 import { getFamily } from '@/lib/families';
-import type { GridColumns, GridSearch } from '@/lib/grid/server';
+import type { GridColumns, GridOptions, GridSearch } from '@/lib/grid/server';
 import { activeTankFacts } from '@/lib/quotes/pricing-context';
 import { tanksForFinish } from '@/lib/quotes/process';
 import type { LinePrice } from '@/lib/quotes/pricing';
@@ -61,6 +61,17 @@ export const workOrderSearch: GridSearch = (pattern) => sql<SqlBool>`w.id in (
   select id from work_orders where number ilike ${pattern} or po_number ilike ${pattern}
   union all select o.id from work_orders o join parts pp on pp.id = o.part_id where pp.part_number ilike ${pattern}
   union all select o.id from work_orders o join customers cc on cc.id = o.customer_id where cc.name ilike ${pattern})`;
+
+/** GET /api/work-orders: the same list for every staff reader, so its answers are kept (lib/grid/list-cache.ts). */
+export const WORK_ORDER_GRID = {
+  columns: WORK_ORDER_GRID_COLUMNS,
+  // Work-order numbers are unique, so the number itself keeps pages stable on its own index.
+  key: 'w.number',
+  defaultSort: { colId: 'number', dir: 'desc' },
+  fileName: 'work-orders',
+  search: workOrderSearch,
+  cache: { name: 'work-orders' },
+} as const satisfies Omit<GridOptions<never>, 'mapRow' | 'db'>;
 
 export async function getWorkOrder(workOrderId: string, conn: Db = defaultDb) {
   const wo = await conn

@@ -2,7 +2,7 @@ import 'server-only';
 import { sql, type Kysely, type SqlBool } from 'kysely';
 import { db as defaultDb } from '@/db';
 import type { Database, ProcessStep, QuoteStatus } from '@/db/types';
-import type { GridColumns } from '@/lib/grid/server';
+import type { GridColumns, GridOptions } from '@/lib/grid/server';
 import type { StoredCalculation } from './mutations';
 import type { LinePrice } from './pricing';
 
@@ -54,6 +54,16 @@ export const QUOTE_GRID_COLUMNS: GridColumns = {
   expires_at: { expr: 'q.expires_at', type: 'date', header: 'Valid until' },
   estimator: { expr: 'u.name', type: 'text', searchable: true, header: 'Estimator' },
 };
+
+/** GET /api/quotes: the same list for every office reader, so its answers are kept (lib/grid/list-cache.ts). */
+export const QUOTE_GRID = {
+  columns: QUOTE_GRID_COLUMNS,
+  key: 'q.id',
+  defaultSort: { colId: 'number', dir: 'desc' },
+  fileName: 'quotes',
+  // A sent quote turns "expired" when its date passes; the next such instant is part of the key.
+  cache: { name: 'quotes', clock: sql`(select min(expires_at) from quotes where status = 'sent' and expires_at > now())` },
+} as const satisfies Omit<GridOptions<never>, 'mapRow' | 'db'>;
 
 export type QuoteLineView = {
   id: string;

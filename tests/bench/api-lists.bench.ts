@@ -14,8 +14,8 @@ import { type CompiledQuery, DummyDriver, Kysely, PostgresAdapter, PostgresIntro
 import type { Database } from '@/db/types';
 import { db } from '@/db';
 import { gridQueryFrom, runGridQuery, type GridOptions } from '@/lib/grid/server';
-import { WORK_ORDER_GRID_COLUMNS, workOrderGridSelect } from '@/lib/orders/queries';
-import { QUOTE_GRID_COLUMNS, quoteGridSelect } from '@/lib/quotes/queries';
+import { WORK_ORDER_GRID, workOrderGridSelect } from '@/lib/orders/queries';
+import { QUOTE_GRID, quoteGridSelect } from '@/lib/quotes/queries';
 import { TestSessions } from '../helpers/sessions';
 import type { BareRoutes } from './bare-list-server';
 import { ROOT, startApp, startServer } from './next-server';
@@ -42,13 +42,13 @@ const ENDPOINTS: Endpoint[] = [
     path: '/api/quotes?offset=0&limit=100',
     floor: 'quotes',
     select: (conn) => quoteGridSelect(conn),
-    options: { columns: QUOTE_GRID_COLUMNS, key: 'q.id', defaultSort: { colId: 'number', dir: 'desc' } },
+    options: QUOTE_GRID,
   },
   {
     path: '/api/work-orders?offset=0&limit=100',
     floor: 'work-orders',
     select: (conn) => workOrderGridSelect(conn),
-    options: { columns: WORK_ORDER_GRID_COLUMNS, key: 'w.number', defaultSort: { colId: 'number', dir: 'desc' } },
+    options: WORK_ORDER_GRID,
   },
 ];
 
