@@ -39,7 +39,8 @@ export function conditionalJsonText(req: Request, body: string, init: { status?:
 
 /**
  * 200 with a body made only when needed, or 304, for an answer whose validator is known before its
- * bytes (a kept list: lib/grid/list-cache.ts).
+ * bytes (a kept list: lib/grid/list-cache.ts; a kept chart: lib/bath/chart-cache.ts). The body goes
+ * out as text: the server's own compression encodes it for readers that take gzip.
  */
 export async function conditionalByValidator(req: Request, etag: string, body: () => Promise<string>): Promise<Response> {
   const headers = { etag, 'cache-control': CONDITIONAL_CACHE_CONTROL, vary: 'cookie' };

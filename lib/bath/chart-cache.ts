@@ -1,5 +1,7 @@
 import 'server-only';
+import { createHash } from 'node:crypto';
 import { sql, type Kysely } from 'kysely';
+import { LRUCache } from 'lru-cache';
 import { db as defaultDb } from '@/db';
 import type { Database } from '@/db/types';
 import { AppError } from '@/lib/errors';
@@ -11,16 +13,45 @@ import { type ChartRange, getChartData, type LimitBasis } from './chart';
 // limits, names and this module's output format. A reader whose stamp matches gets the stored
 // answer; any new or corrected analysis, a change of limits or a new format means the next reader
 // works the chart out again and stores it. Five years of readings are read and judged once per
-// change, not once per request.
+// change, not once per request. Each app process also keeps the charts it served lately under the
+// same stamp (read from PostgreSQL before every answer, so another process's change is seen at the
+// next read): a repeated read is the stamp's one-row statement and no 100 KB body from the database.
 
 /** Bump when getChartData's output changes shape or content, so charts stored by an older build are not served. */
 export const CHART_FORMAT = 1;
 
+// At most 200 charts and 64 MB of JSON per process.
+const kept = new LRUCache<string, { body: string; etag: string }>({ max: 200, maxSize: 64 * 1024 * 1024, sizeCalculation: (a) => Math.max(1, a.body.length) });
+
+/** Forgets the charts this process keeps: it then reads as a process that has served none yet would (tests). */
+export function forgetKeptCharts(): void {
+  kept.clear();
+}
+
 /**
- * The stamp is read before the readings: a chart worked out from a later snapshot than its stamp
- * holds at least what the stamp promises (a reader with a newer stamp misses and works it out
- * again), so no reader is ever served a chart older than the data it could see.
+ * The chart's JSON and its validator (named by the stamp, so a revalidation needs no body). The
+ * stamp is read before the readings: a chart worked out from a later snapshot than its stamp holds
+ * at least what the stamp promises (a reader with a newer stamp misses and works it out again), so
+ * no reader is ever served a chart older than the data it could see.
  */
+export async function chartAnswer(
+  tankId: string,
+  analyteId: string,
+  range: ChartRange,
+  system: UnitSystem,
+  basis: LimitBasis,
+  executor: Kysely<Database> = defaultDb,
+): Promise<{ body: string; etag: string }> {
+  const { view, version } = await stampOf(tankId, analyteId, range, system, basis, executor);
+  const key = `${analyteId}|${view}|${version}`;
+  const held = kept.get(key);
+  if (held) return held;
+  const answer = { body: await storedOrWorkedOut(tankId, analyteId, range, system, basis, view, version, executor), etag: `W/"c${createHash('sha1').update(key).digest('base64url')}"` };
+  kept.set(key, answer);
+  return answer;
+}
+
+/** The chart's JSON alone. */
 export async function chartJson(
   tankId: string,
   analyteId: string,
@@ -29,6 +60,10 @@ export async function chartJson(
   basis: LimitBasis,
   executor: Kysely<Database> = defaultDb,
 ): Promise<string> {
+  return (await chartAnswer(tankId, analyteId, range, system, basis, executor)).body;
+}
+
+async function stampOf(tankId: string, analyteId: string, range: ChartRange, system: UnitSystem, basis: LimitBasis, executor: Kysely<Database>): Promise<{ view: string; version: string }> {
   const stamp = await executor
     .selectFrom('tank_analytes as a')
     .innerJoin('tanks as t', 't.id', 'a.tank_id')
@@ -43,6 +78,19 @@ export async function chartJson(
   if (!stamp) throw new AppError('NOT_FOUND', 'That analyte does not belong to this tank.');
   const view = `${range.from.toISOString()}/${range.to.toISOString()}/${basis}/${system}`;
   const version = `${CHART_FORMAT}:${stamp.analyses_version}:${stamp.analyte_updated}:${stamp.names}`;
+  return { view, version };
+}
+
+async function storedOrWorkedOut(
+  tankId: string,
+  analyteId: string,
+  range: ChartRange,
+  system: UnitSystem,
+  basis: LimitBasis,
+  view: string,
+  version: string,
+  executor: Kysely<Database>,
+): Promise<string> {
   const hit = await executor
     .selectFrom('chart_cache')
     .select('body')

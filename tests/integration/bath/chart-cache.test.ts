@@ -1,13 +1,18 @@
-// The control chart's stored JSON: served while nothing it was worked out from has changed, and
+// The control chart's stored JSON (in PostgreSQL, and kept by each process under the same stamp): served while nothing it was worked out from has changed, and
 // worked out again after any new or corrected analysis, a change of limits, or a bulk load.
-import { sql } from 'kysely';
+import { Kysely, PostgresDialect, sql } from 'kysely';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { db } from '@/db';
+import { db, pool } from '@/db';
+import type { Database } from '@/db/types';
 import { getChartData } from '@/lib/bath/chart';
-import { chartJson } from '@/lib/bath/chart-cache';
+import { chartAnswer, chartJson, forgetKeptCharts } from '@/lib/bath/chart-cache';
 import { updateAnalyteLimits } from '@/lib/bath/limits';
 import { logAnalysis } from '@/lib/bath/log-analysis';
 import { actor, key, makeTank, removeTank, type TestTank } from './fixtures';
+
+// A connection that writes down every statement it sends.
+const sent: string[] = [];
+const watched = new Kysely<Database>({ dialect: new PostgresDialect({ pool }), log: (e) => void (e.level === 'query' && sent.push(e.query.sql)) });
 
 let tank: TestTank;
 let plater: Awaited<ReturnType<typeof actor>>;
@@ -42,12 +47,26 @@ describe('the stored control chart', () => {
     const [row] = await stored();
     expect(row!.body).toBe(first);
 
-    // Served as stored: a body planted under the same stamp comes back, proof that nothing was worked out.
+    // Kept by this process: read again, it costs the stamp's one statement and nothing else.
+    sent.length = 0;
+    expect(await chartJson(tank.id, nickel, range, 'metric', 'all', watched)).toBe(first);
+    expect(sent).toHaveLength(1);
+    expect(sent[0]).toMatch(/from "tank_analytes" as "a"/);
+
+    // Served as stored to a process that has not kept it: a body planted under the same stamp comes
+    // back, proof that nothing was worked out.
     await db.updateTable('chart_cache').set({ body: '{"planted":true}' }).where('analyte_id', '=', nickel).execute();
+    forgetKeptCharts();
     expect(await chartJson(tank.id, nickel, range, 'metric', 'all')).toBe('{"planted":true}');
+
+    // The validator names the stamp: the same while nothing changed, another after any change.
+    const etag = (await chartAnswer(tank.id, nickel, range, 'metric', 'all')).etag;
+    expect(etag).toMatch(/^W\/"c[A-Za-z0-9_-]{27}"$/);
+    expect((await chartAnswer(tank.id, nickel, range, 'metric', 'all')).etag).toBe(etag);
 
     // A new analysis, even one dated back inside the range, makes the next reader work it out again.
     await log(30, 20);
+    expect((await chartAnswer(tank.id, nickel, range, 'metric', 'all')).etag).not.toBe(etag);
     const after = await chartJson(tank.id, nickel, range, 'metric', 'all');
     expect(after).toBe(await fresh());
     expect(JSON.parse(after).readings.total).toBe(5);

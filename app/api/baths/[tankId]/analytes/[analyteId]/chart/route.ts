@@ -1,10 +1,10 @@
 // GET /api/baths/<tankId>/analytes/<analyteId>/chart?from&to[&limits=baseline][&format=csv] — staff who may read
 // bath records (bath.read): the analyte's individuals chart data, in the reader's units.
 import { CHART_DAY, chartCsv, getChartData, parseChartRange } from '@/lib/bath/chart';
-import { chartJson } from '@/lib/bath/chart-cache';
+import { chartAnswer } from '@/lib/bath/chart-cache';
 import { AppError } from '@/lib/errors';
 import { withPermission } from '@/lib/http';
-import { conditionalJsonText } from '@/lib/http-etag';
+import { conditionalByValidator, conditionalJsonText } from '@/lib/http-etag';
 
 export const dynamic = 'force-dynamic';
 
@@ -20,7 +20,10 @@ export const GET = withPermission<{ tankId: string; analyteId: string }>('bath.r
     // A range of whole days (what the chart screen asks for) is stored once per change of its
     // analyte (lib/bath/chart-cache.ts); any other range is worked out each time.
     const days = [params.get('from'), params.get('to')].every((d) => d !== null && CHART_DAY.test(d));
-    if (days) return conditionalJsonText(req, await chartJson(tankId, analyteId, range, user.unitSystem, basis));
+    if (days) {
+      const answer = await chartAnswer(tankId, analyteId, range, user.unitSystem, basis);
+      return conditionalByValidator(req, answer.etag, async () => answer.body);
+    }
     return conditionalJsonText(req, JSON.stringify(await getChartData(tankId, analyteId, range, user.unitSystem, undefined, basis)));
   }
   // The CSV holds every reading.
