@@ -178,7 +178,7 @@ export async function creditsOnAccount(database: Kysely<Database> = defaultDb): 
 
 /** Open invoices a page at a time, most overdue first; the page after one starts past its last (due date, number). */
 export type ReceivablesCursor = { dueOn: string; number: string };
-export const RECEIVABLES_PAGE_SIZE = 50;
+export const RECEIVABLES_PAGE_SIZE = 25;
 
 export type ReceivablesReport = AgingReport & {
   /** Every open invoice, of which `invoices` is one page. */

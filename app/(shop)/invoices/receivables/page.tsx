@@ -16,7 +16,7 @@ import { LINK } from '../_components/invoice-view';
 export const metadata: Metadata = { title: 'Receivables' };
 
 /** Customers listed by name before the rest are summed on one line (all of them on asking). */
-const TOP_CUSTOMERS = 25;
+const TOP_CUSTOMERS = 10;
 
 
 function BucketCells({ totals }: { totals: BucketTotals }) {
