@@ -24,7 +24,7 @@ export default async function ShopLayout({ children }: { children: ReactNode }) 
           items={items}
           brand={<Brand href="/home" />}
           footer={<UserMenu user={user} accountHref="/account" />}
-          className="md:sticky md:top-0 md:h-screen md:w-full"
+          className="md:sticky md:top-0 md:h-screen md:w-full md:overflow-y-auto"
         />
       </div>
       <main className="min-w-0 flex-1 px-4 py-6 md:px-8">{children}</main>

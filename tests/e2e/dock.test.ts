@@ -109,6 +109,7 @@ describe('dock to dock', () => {
       await page.goto(`${APP_URL}/work-orders/${workOrderId}`);
       const row = page.locator('dt', { hasText: 'Planned on the line' }).locator('xpath=following-sibling::dd[1]');
       expect(await row.getByRole('link').textContent()).toContain(formatDay(plannedDay));
+      await screenshot(page, 'dock-order-planned');
     });
     const placed = await db.selectFrom('schedule_placements').select(['day']).where('work_order_id', '=', workOrderId).executeTakeFirstOrThrow();
     expect(isoDate(placed.day)).toBe(plannedDay);
