@@ -24,6 +24,11 @@ export function matches(ifNoneMatch: string | null, etag: string): boolean {
   return ifNoneMatch.split(',').some((t) => t.trim() === '*' || bare(t) === want);
 }
 
+/** The headers every conditional answer carries: its validator, kept by this browser only and asked again each time. */
+function validated(etag: string): Record<string, string> {
+  return { etag, 'cache-control': CONDITIONAL_CACHE_CONTROL, vary: 'cookie' };
+}
+
 /** 200 with the JSON and its ETag, or 304 when the reader already holds exactly these bytes. */
 export function conditionalJson(req: Request, data: unknown, init: { status?: number; headers?: Record<string, string> } = {}): Response {
   return conditionalJsonText(req, JSON.stringify(data), init);
@@ -32,7 +37,7 @@ export function conditionalJson(req: Request, data: unknown, init: { status?: nu
 /** The same, for JSON already serialised (e.g. kept in the database). */
 export function conditionalJsonText(req: Request, body: string, init: { status?: number; headers?: Record<string, string> } = {}): Response {
   const etag = etagFor(body);
-  const headers = { ...init.headers, etag, 'cache-control': CONDITIONAL_CACHE_CONTROL, vary: 'cookie' };
+  const headers = { ...init.headers, ...validated(etag) };
   if (matches(req.headers.get('if-none-match'), etag)) return new Response(null, { status: 304, headers });
   return new Response(body, { status: init.status ?? 200, headers: { ...headers, 'content-type': 'application/json' } });
 }
@@ -43,7 +48,7 @@ export function conditionalJsonText(req: Request, body: string, init: { status?:
  * out as text: the server's own compression encodes it for readers that take gzip.
  */
 export async function conditionalByValidator(req: Request, etag: string, body: () => Promise<string>): Promise<Response> {
-  const headers = { etag, 'cache-control': CONDITIONAL_CACHE_CONTROL, vary: 'cookie' };
+  const headers = validated(etag);
   if (matches(req.headers.get('if-none-match'), etag)) return new Response(null, { status: 304, headers });
   return new Response(await body(), { headers: { ...headers, 'content-type': 'application/json' } });
 }

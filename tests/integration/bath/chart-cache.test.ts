@@ -1,18 +1,16 @@
 // The control chart's stored JSON (in PostgreSQL, and kept by each process under the same stamp): served while nothing it was worked out from has changed, and
 // worked out again after any new or corrected analysis, a change of limits, or a bulk load.
-import { Kysely, PostgresDialect, sql } from 'kysely';
+import { sql } from 'kysely';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { db, pool } from '@/db';
-import type { Database } from '@/db/types';
+import { db } from '@/db';
 import { getChartData } from '@/lib/bath/chart';
 import { chartAnswer, chartJson, forgetKeptCharts } from '@/lib/bath/chart-cache';
 import { updateAnalyteLimits } from '@/lib/bath/limits';
 import { logAnalysis } from '@/lib/bath/log-analysis';
+import { statementLog } from '../../helpers/statement-log';
 import { actor, key, makeTank, removeTank, type TestTank } from './fixtures';
 
-// A connection that writes down every statement it sends.
-const sent: string[] = [];
-const watched = new Kysely<Database>({ dialect: new PostgresDialect({ pool }), log: (e) => void (e.level === 'query' && sent.push(e.query.sql)) });
+const { db: watched, sent } = statementLog();
 
 let tank: TestTank;
 let plater: Awaited<ReturnType<typeof actor>>;

@@ -2,18 +2,16 @@
 // committed write anywhere the lists read (here from another connection, as another app process
 // or a script would) is seen by the next read, a rolled-back one changes nothing, and a sent
 // quote's expiry changes the list with no write at all.
-import { Kysely, PostgresDialect, sql } from 'kysely';
+import { sql } from 'kysely';
 import { afterAll, describe, expect, it } from 'vitest';
-import { db, pool } from '@/db';
-import type { Database } from '@/db/types';
+import { db } from '@/db';
 import { gridResponse } from '@/lib/grid/server';
 import { QUOTE_GRID, quoteGridSelect } from '@/lib/quotes/queries';
 import { WORK_ORDER_GRID, workOrderGridSelect } from '@/lib/orders/queries';
+import { statementLog } from '../../helpers/statement-log';
 import { makeCustomer } from '../quotes/fixtures';
 
-// A connection that writes down every statement it sends, to see which ones a read needs.
-const sent: string[] = [];
-const watched = new Kysely<Database>({ dialect: new PostgresDialect({ pool }), log: (e) => void (e.level === 'query' && sent.push(e.query.sql)) });
+const { db: watched, sent } = statementLog();
 
 afterAll(() => db.destroy());
 
