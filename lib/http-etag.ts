@@ -16,6 +16,11 @@ export function etagFor(body: string): string {
   return `W/"${createHash('sha1').update(body).digest('base64url')}"`;
 }
 
+/** A weak validator named by what an answer was made from (a kept answer's key), not by its bytes. */
+export function etagForKey(kind: string, key: string): string {
+  return `W/"${kind}${createHash('sha1').update(key).digest('base64url')}"`;
+}
+
 /** Whether If-None-Match names this validator (a list, "*", or weak/strong forms alike). */
 export function matches(ifNoneMatch: string | null, etag: string): boolean {
   if (!ifNoneMatch) return false;

@@ -1,10 +1,10 @@
 import 'server-only';
-import { createHash } from 'node:crypto';
 import { sql, type Kysely } from 'kysely';
 import { LRUCache } from 'lru-cache';
 import { db as defaultDb } from '@/db';
 import type { Database } from '@/db/types';
 import { AppError } from '@/lib/errors';
+import { etagForKey } from '@/lib/http-etag';
 import type { UnitSystem } from '@/lib/plating/units';
 import { type ChartRange, getChartData, type LimitBasis } from './chart';
 
@@ -46,7 +46,7 @@ export async function chartAnswer(
   const key = `${analyteId}|${view}|${version}`;
   const held = kept.get(key);
   if (held) return held;
-  const answer = { body: await storedOrWorkedOut(tankId, analyteId, range, system, basis, view, version, executor), etag: `W/"c${createHash('sha1').update(key).digest('base64url')}"` };
+  const answer = { body: await storedOrWorkedOut(tankId, analyteId, range, system, basis, view, version, executor), etag: etagForKey('c', key) };
   kept.set(key, answer);
   return answer;
 }

@@ -11,9 +11,9 @@ import 'server-only';
 // one read: no list query, no JSON. Only for lists whose rows are the same for every reader allowed
 // to see them (the staff lists); AMPWRIGHT_LIST_CACHE=off turns the keeping off (the ten-year
 // benchmark times the queries themselves).
-import { createHash } from 'node:crypto';
 import { type Kysely, type RawBuilder, sql } from 'kysely';
 import { LRUCache } from 'lru-cache';
+import { etagForKey } from '@/lib/http-etag';
 
 export type ListCache = {
   /** The list's name, e.g. "quotes". */
@@ -40,7 +40,7 @@ export async function listDataVersion(conn: Kysely<any>, clock?: RawBuilder<unkn
 /** The key and validator of one list answer. */
 export function listKey(cache: ListCache, version: string, query: unknown): { key: string; etag: string } {
   const key = `${cache.name}\n${version}\n${JSON.stringify(query)}`;
-  return { key, etag: `W/"l${createHash('sha1').update(key).digest('base64url')}"` };
+  return { key, etag: etagForKey('l', key) };
 }
 
 export function keptAnswer(key: string): string | undefined {

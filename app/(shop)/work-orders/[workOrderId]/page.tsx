@@ -49,6 +49,7 @@ export default async function WorkOrderPage({ params }: { params: Promise<{ work
     plannedDatesOf([wo.id]),
   ]);
   const planned = plannedMap.get(wo.id);
+  const plannedWords = plannedText(planned, wo.state);
   const next = nextState(wo.state, wo.bake_required);
   const family = getFamily(wo.family);
   const runsWithCurrent = family.runsWithCurrent;
@@ -117,7 +118,7 @@ export default async function WorkOrderPage({ params }: { params: Promise<{ work
             </dd>
             <dt className="text-ink-muted">Planned on the line</dt>
             <dd>
-              {can(user, 'schedule.read') ? <Link href="/schedule">{plannedText(planned, wo.state, formatDay)}</Link> : plannedText(planned, wo.state, formatDay)}
+              {can(user, 'schedule.read') ? <Link href="/schedule">{plannedWords}</Link> : plannedWords}
               {planned?.isLate ? (
                 <span className="ml-2">
                   <StatusBadge status="out" label="Misses its promised date" size="sm" />

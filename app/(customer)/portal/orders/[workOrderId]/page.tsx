@@ -41,7 +41,7 @@ export default async function PortalOrderPage({ params }: { params: Promise<{ wo
           <dt className="text-ink-muted">Promised</dt>
           <dd>{formatDay(o.due_date)}</dd>
           <dt className="text-ink-muted">Planned on the line</dt>
-          <dd>{plannedText(planned, o.state, formatDay)}</dd>
+          <dd>{plannedText(planned, o.state)}</dd>
           <dt className="text-ink-muted">Shipped</dt>
           <dd>{lastOut ? `${formatDateTime(lastOut)}${o.state === 'shipped' || o.state === 'invoiced' ? '' : ' (part of the order)'}` : 'Not yet'}</dd>
           <dt className="text-ink-muted">Counts</dt>
